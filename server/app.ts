@@ -1,0 +1,80 @@
+import { randomUUID } from 'node:crypto';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import { configurePassport } from './auth/passport';
+import { requireSameOrigin } from './auth/same-origin';
+import { sessionMiddleware } from './auth/session';
+import { env, type Env } from './env';
+import { AppError, errorHandler } from './errors';
+import { logger } from './lib/logger';
+import { apiRouter } from './routes/index';
+
+/** Builds the Express app without listening, so tests mount it on port 0. */
+export function createApp(e: Env = env()): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', e.TRUST_PROXY ? 1 : false);
+  app.set('query parser', 'extended');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          'default-src': ["'self'"],
+          'script-src': ["'self'"],
+          // Toast and table libraries set style elements at run time; scripts stay strictly same-origin.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'"],
+          'connect-src': ["'self'"],
+          'form-action': ["'self'"],
+          'frame-ancestors': ["'none'"],
+          'base-uri': ["'self'"],
+          'object-src': ["'none'"],
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const incoming = req.headers['x-request-id'];
+        const id = typeof incoming === 'string' && /^[\w-]{8,64}$/.test(incoming) ? incoming : randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+    }),
+  );
+
+  const api = express.Router();
+  const origins = [e.APP_ORIGIN, ...e.EXTRA_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean)];
+  api.use(requireSameOrigin(origins, ['/webhooks/stripe']));
+  // The Stripe webhook needs the raw bytes for its signature check, so it is mounted before the JSON parser.
+  api.use('/webhooks/stripe', express.raw({ type: '*/*', limit: '1mb' }));
+  api.use(express.json({ limit: '1mb' }));
+  api.use(express.urlencoded({ extended: false, limit: '100kb' }));
+  api.use(sessionMiddleware(e));
+  const passport = configurePassport();
+  api.use(passport.initialize());
+  api.use(passport.session());
+  api.use(apiRouter);
+  api.use((req, _res, next) => next(new AppError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}`)));
+  app.use('/api', api);
+
+  const clientDir = path.resolve(e.CLIENT_DIST);
+  if (existsSync(path.join(clientDir, 'index.html'))) {
+    app.use('/assets', express.static(path.join(clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    // Client-side routes: every other GET gets the app shell.
+    app.get(/^(?!\/api\/|\/media\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+  app.use(errorHandler);
+  return app;
+}
