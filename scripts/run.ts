@@ -122,8 +122,22 @@ interface VitestJson {
   success: boolean;
 }
 
+/** Browser tests need Debian's chromium, label tests poppler's pdftoppm: install them when missing (as root). */
+async function ensureDebianTools() {
+  const want: Array<[string, string]> = [['/usr/bin/chromium', 'chromium'], ['/usr/bin/pdftoppm', 'poppler-utils']];
+  const missing = want.filter(([file]) => !existsSync(file)).map(([, pkg]) => pkg);
+  if (!missing.length) return;
+  if (process.getuid?.() !== 0) {
+    say(`missing Debian packages: ${missing.join(' ')} — install them with: sudo apt-get install -y ${missing.join(' ')}`);
+    return;
+  }
+  await runStep('apt-get update', 'apt-get', ['update', '-qq']);
+  await runStep(`apt-get install ${missing.join(' ')}`, 'apt-get', ['install', '-y', '-qq', ...missing], { ...process.env, DEBIAN_FRONTEND: 'noninteractive' });
+}
+
 async function test() {
   const started = Date.now();
+  await ensureDebianTools();
   const { cluster, databaseUrl } = await provision('test');
   if (!(await seed(databaseUrl))) {
     cluster?.stop();

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { authRouter } from './auth';
+import { adminCatalogRouter, catalogRouter } from './catalog';
 import { healthRouter } from './health';
 import { adminSellerApplicationsRouter, sellerApplicationsRouter } from './seller-applications';
 
@@ -9,3 +10,5 @@ apiRouter.use('/health', healthRouter);
 apiRouter.use('/auth', authRouter);
 apiRouter.use('/seller-applications', sellerApplicationsRouter);
 apiRouter.use('/admin/seller-applications', adminSellerApplicationsRouter);
+apiRouter.use('/admin', adminCatalogRouter);
+apiRouter.use('/', catalogRouter);

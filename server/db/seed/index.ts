@@ -1,14 +1,16 @@
 // Demo seed: fictional accounts and the fictional demo catalog. Idempotent: running it again changes nothing.
 import { closeDb, getDb } from '../client';
 import { seedAccounts } from './accounts';
+import { seedCatalog } from './catalog';
 
 export async function seedDemo() {
   const db = getDb();
   const accounts = await seedAccounts(db);
-  return { accounts };
+  const catalog = await seedCatalog(db);
+  return { accounts, catalog };
 }
 
 const started = Date.now();
-await seedDemo();
+const r = await seedDemo();
 await closeDb();
-console.log(`[seed] demo data ready in ${Date.now() - started} ms`);
+console.log(`[seed] demo data ready in ${Date.now() - started} ms (${JSON.stringify(r.catalog)})`);
