@@ -18,7 +18,7 @@ const say = (m: string) => console.log(`[drabyard] ${m}`);
 type StripeFake = { url: string; port: number; close: () => Promise<void> };
 
 async function startStripe(port: number, webhookUrl: string, secret: string): Promise<StripeFake | null> {
-  const modPath = path.join(root, 'docker-free-fakes', 'stripe', 'stripe-fake.ts');
+  const modPath = path.join(root, 'docker-free-fakes', 'stripe', 'app.ts');
   if (!existsSync(modPath)) return null;
   const mod = (await import(modPath)) as { startStripeFake: (o: Record<string, unknown>) => Promise<StripeFake> };
   return mod.startStripeFake({ port, webhookUrl, webhookSecret: secret });

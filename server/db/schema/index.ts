@@ -1,3 +1,5 @@
 export * from './auth';
 export * from './catalog';
 export * from './listings';
+export * from './orders';
+export * from './garage';
