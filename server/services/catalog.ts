@@ -164,7 +164,11 @@ async function chainFor(partId: string) {
   const stack = [partId];
   while (stack.length) {
     const cur = stack.pop()!;
-    for (const e of index.out.get(cur) ?? []) if (!forward.has(e.toPartId)) forward.add(e.toPartId), stack.push(e.toPartId);
+    for (const e of index.out.get(cur) ?? []) {
+      if (forward.has(e.toPartId)) continue;
+      forward.add(e.toPartId);
+      stack.push(e.toPartId);
+    }
   }
   const current = [...forward].filter((id) => !(index.out.get(id)?.length));
   const partRows = g.partIds.length ? await getDb().select().from(parts).where(inArray(parts.id, g.partIds)) : [];

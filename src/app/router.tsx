@@ -1,0 +1,93 @@
+import { useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { useMemo } from 'react';
+import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
+import { AppSkeleton } from '@/components/layouts/page-skeleton';
+import { paths } from '@/config/paths';
+import { requireUserLoader, RequireAuth } from '@/features/auth/components/require-auth';
+import { RequireRole } from '@/features/auth/components/require-role';
+import { AppRoot } from './routes/app-root';
+import { NotFoundRoute } from './routes/not-found';
+import { RootErrorBoundary, RouteErrorBoundary } from './routes/route-error';
+
+// Paths relative to '/', the root route.
+const rel = (path: string) => path.replace(/^\//, '');
+
+/**
+ * The route tree. Pages load lazily, each from its own module under routes/, so a page can be replaced
+ * without touching the others. Exported apart from the router so tests can mount it in a memory router.
+ */
+export function createRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      id: 'root',
+      path: paths.home.path,
+      Component: AppRoot,
+      ErrorBoundary: RootErrorBoundary,
+      HydrateFallback: AppSkeleton,
+      children: [
+        {
+          // Page errors render inside the layout, so the header and navigation stay usable.
+          ErrorBoundary: RouteErrorBoundary,
+          children: [
+            { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
+            { path: rel(paths.catalog.path), lazy: () => import('./routes/catalog/catalog').then((m) => ({ Component: m.CatalogRoute })) },
+            { path: rel(paths.search.path), lazy: () => import('./routes/search/search').then((m) => ({ Component: m.SearchRoute })) },
+            { path: rel(paths.auth.signIn.path), lazy: () => import('./routes/auth/sign-in').then((m) => ({ Component: m.SignInRoute })) },
+            { path: rel(paths.auth.register.path), lazy: () => import('./routes/auth/register').then((m) => ({ Component: m.RegisterRoute })) },
+            { path: rel(paths.auth.verifyEmail.path), lazy: () => import('./routes/auth/verify-email').then((m) => ({ Component: m.VerifyEmailRoute })) },
+            { path: rel(paths.auth.forgotPassword.path), lazy: () => import('./routes/auth/forgot-password').then((m) => ({ Component: m.ForgotPasswordRoute })) },
+            { path: rel(paths.auth.resetPassword.path), lazy: () => import('./routes/auth/reset-password').then((m) => ({ Component: m.ResetPasswordRoute })) },
+            {
+              // Signed-in area: the loader sends anonymous visitors to /sign-in?next=...
+              id: 'signed-in',
+              loader: requireUserLoader(queryClient),
+              Component: RequireAuth,
+              children: [
+                { path: rel(paths.account.root.path), lazy: () => import('./routes/account/account').then((m) => ({ Component: m.AccountRoute })) },
+                {
+                  path: rel(paths.account.sellerApplication.path),
+                  lazy: () => import('./routes/account/seller-application').then((m) => ({ Component: m.SellerApplicationRoute })),
+                },
+                {
+                  element: <RequireRole role="buyer" />,
+                  children: [
+                    { path: rel(paths.garage.path), lazy: () => import('./routes/garage/garage').then((m) => ({ Component: m.GarageRoute })) },
+                    { path: rel(paths.cart.path), lazy: () => import('./routes/cart/cart').then((m) => ({ Component: m.CartRoute })) },
+                    { path: rel(paths.orders.path), lazy: () => import('./routes/orders/orders').then((m) => ({ Component: m.OrdersRoute })) },
+                  ],
+                },
+                {
+                  path: rel(paths.seller.path),
+                  element: <RequireRole role="seller" />,
+                  children: [{ index: true, lazy: () => import('./routes/seller/seller-desk').then((m) => ({ Component: m.SellerDeskRoute })) }],
+                },
+                {
+                  path: rel(paths.admin.root.path),
+                  element: <RequireRole role="admin" />,
+                  children: [
+                    { index: true, lazy: () => import('./routes/admin/admin-index').then((m) => ({ Component: m.AdminIndexRoute })) },
+                    {
+                      path: 'seller-applications',
+                      lazy: () => import('./routes/admin/seller-applications').then((m) => ({ Component: m.AdminSellerApplicationsRoute })),
+                    },
+                  ],
+                },
+              ],
+            },
+            { path: '*', Component: NotFoundRoute },
+          ],
+        },
+      ],
+    },
+  ];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  return createBrowserRouter(createRoutes(queryClient));
+}
+
+export function AppRouter() {
+  const queryClient = useQueryClient();
+  const router = useMemo(() => createAppRouter(queryClient), [queryClient]);
+  return <RouterProvider router={router} />;
+}
