@@ -16,7 +16,23 @@ export default defineConfig({
     port: Number(process.env.VITE_PORT ?? 5173),
     proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/media': `http://127.0.0.1:${apiPort}` },
   },
-  build: { outDir: 'dist/client', sourcemap: false, chunkSizeWarningLimit: 400 },
+  build: {
+    outDir: 'dist/client',
+    sourcemap: false,
+    manifest: true,
+    chunkSizeWarningLimit: 400,
+    rollupOptions: {
+      output: {
+        // Libraries change less often than our code: a separate chunk stays cached across releases.
+        manualChunks(id: string) {
+          if (!id.includes('node_modules')) return undefined;
+          if (/node_modules\/(react|react-dom|scheduler|react-router|react-router-dom)\//.test(id)) return 'vendor-react';
+          if (/node_modules\/(@tanstack\/react-query|@tanstack\/query-core)\//.test(id)) return 'vendor-query';
+          return undefined;
+        },
+      },
+    },
+  },
   // vitest: one project per kind of test (see DEVELOPERS.md).
   test: {
     projects: [

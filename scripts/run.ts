@@ -165,6 +165,7 @@ async function test() {
     checks.push(['typecheck', await runStep('typecheck', bin('tsc'), ['--noEmit', '-p', 'tsconfig.json'], env)]);
     checks.push(['lint', await runStep('lint', bin('eslint'), ['-c', 'scripts/eslint.config.js', '.', '--max-warnings=0'], env)]);
     checks.push(['build', await runStep('client build', bin('vite'), ['build', '--logLevel', 'warn'], env)]);
+    checks.push(['page weight', await runStep('page-weight budget', bin('tsx'), ['scripts/check-bundle.ts'], env)]);
   }
   const report = path.join(artifacts, 'vitest.json');
   rmSync(report, { force: true });
@@ -189,7 +190,7 @@ async function test() {
   failed += failedChecks.length;
   passed += checks.length - failedChecks.length;
   if (failedChecks.length) say(`failed checks: ${failedChecks.join(', ')}`);
-  say(`finished in ${Math.round((Date.now() - started) / 1000)} s (typecheck, lint and build count as one test each)`);
+  say(`finished in ${Math.round((Date.now() - started) / 1000)} s (typecheck, lint, build and page weight count as one test each)`);
   console.log(`tests: ${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);
   process.exit(failed === 0 && passed > 0 ? 0 : 1);
 }
