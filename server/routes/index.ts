@@ -4,11 +4,24 @@ import { adminCatalogRouter, catalogRouter } from './catalog';
 import { healthRouter } from './health';
 import { adminSellerApplicationsRouter, sellerApplicationsRouter } from './seller-applications';
 
-/** The router table: every API route is mounted here (the authorisation matrix walks it). */
+/**
+ * The router table: every API router is mounted from this list (the authorisation matrix and the API
+ * documentation walk it). ADD NEW ROUTERS AS ENTRIES OF `mounts` (one line each); the catch-all '/' catalog
+ * router is mounted last, from `tail`.
+ */
+export const mounts: Array<readonly [string, Router]> = [
+  ['/health', healthRouter],
+  ['/auth', authRouter],
+  ['/seller-applications', sellerApplicationsRouter],
+  ['/admin/seller-applications', adminSellerApplicationsRouter],
+  ['/admin', adminCatalogRouter],
+];
+
+/** Routers mounted last, after every helper's entries above. */
+const tail: Array<readonly [string, Router]> = [['/', catalogRouter]];
+
 export const apiRouter = Router();
-apiRouter.use('/health', healthRouter);
-apiRouter.use('/auth', authRouter);
-apiRouter.use('/seller-applications', sellerApplicationsRouter);
-apiRouter.use('/admin/seller-applications', adminSellerApplicationsRouter);
-apiRouter.use('/admin', adminCatalogRouter);
-apiRouter.use('/', catalogRouter);
+export function allMounts() {
+  return [...mounts, ...tail];
+}
+for (const [prefix, router] of allMounts()) apiRouter.use(prefix, router);
