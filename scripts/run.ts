@@ -92,7 +92,12 @@ async function start(dev: boolean) {
     children.push(spawn(bin('vite'), ['--host', '127.0.0.1'], { cwd: root, stdio: 'inherit', env }));
     say(`dev: open ${origin} (Vite with hot reload; API on :${appPort} in watch mode)`);
   } else {
-    if (!(await runStep('building the client', bin('vite'), ['build', '--logLevel', 'warn']))) process.exit(1);
+    if (!(await runStep('building the client', bin('vite'), ['build', '--logLevel', 'warn']))) {
+      await mail?.close();
+      await stripe?.close();
+      cluster?.stop();
+      process.exit(1);
+    }
     children.push(spawn(bin('tsx'), ['server/index.ts'], { cwd: root, stdio: 'inherit', env: { ...env, NODE_ENV: process.env.NODE_ENV ?? 'production' } }));
     say(`open ${origin} — demo accounts are listed in README.md (password drabyard-demo). Ctrl-C stops everything.`);
   }
