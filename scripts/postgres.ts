@@ -52,9 +52,10 @@ function asPgUser(bin: string, args: string[], opts: { quiet?: boolean } = {}) {
   return r;
 }
 
+/** The postgres user must be able to reach (search) the folder that holds the cluster's own folders. */
 function pgUserCanReach(dir: string): boolean {
   if (!isRoot) return true;
-  const r = spawnSync('runuser', ['-u', 'postgres', '--', 'test', '-w', dir], { stdio: 'ignore' });
+  const r = spawnSync('runuser', ['-u', 'postgres', '--', 'test', '-x', dir], { stdio: 'ignore' });
   return r.status === 0;
 }
 
@@ -88,7 +89,7 @@ export async function ensureCluster(opts: { dataDir: string; port: number; fast?
   mkdirSync(parent, { recursive: true });
   if (!pgUserCanReach(parent)) {
     const alt = path.join(os.tmpdir(), `drabyard-pg-${createHash('sha1').update(dataDir).digest('hex').slice(0, 10)}`);
-    log(`the postgres user cannot write ${parent}; using ${alt} instead`);
+    log(`the postgres user cannot reach ${parent}; using ${alt} instead`);
     mkdirSync(alt, { recursive: true });
     if (isRoot) spawnSync('chmod', ['755', alt]);
     dataDir = path.join(alt, path.basename(dataDir));
@@ -171,4 +172,20 @@ export async function ensureDatabase(databaseUrl: string, opts: { fresh?: boolea
 export function pgTool(name: string): string {
   const bin = ensurePgInstalled();
   return path.join(bin, name);
+}
+
+/** Drops a database (used for per-run test databases). */
+export async function dropDatabase(databaseUrl: string) {
+  const u = new URL(databaseUrl);
+  const db = decodeURIComponent(u.pathname.slice(1));
+  u.pathname = '/postgres';
+  const client = new pg.Client({ connectionString: u.toString() });
+  await client.connect();
+  try {
+    await client.query(`DROP DATABASE IF EXISTS "${db.replace(/"/g, '')}" WITH (FORCE)`);
+    const others = await client.query("SELECT count(*)::int AS n FROM pg_database WHERE datname LIKE 'drabyard\\_test\\_%'");
+    return { othersRunning: others.rows[0].n as number };
+  } finally {
+    await client.end();
+  }
 }

@@ -8,7 +8,7 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { runMigrations } from '../server/db/migrate';
 import { startMailFake, type MailFake } from '../docker-free-fakes/mail/mail-fake';
-import { ensureCluster, ensureDatabase, type Cluster } from './postgres';
+import { dropDatabase, ensureCluster, ensureDatabase, type Cluster } from './postgres';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const mode = process.argv[2] ?? 'start';
@@ -33,14 +33,15 @@ async function provision(kind: 'app' | 'test') {
     databaseUrl = process.env.DATABASE_URL;
     if (test) {
       const u = new URL(databaseUrl);
-      u.pathname = `/${u.pathname.slice(1)}_test`;
+      u.pathname = `/${u.pathname.slice(1)}_test_${process.pid}`;
       databaseUrl = u.toString();
     }
     say(`using DATABASE_URL (${new URL(databaseUrl).host})`);
   } else {
     const port = Number(test ? (process.env.DRABYARD_TEST_PG_PORT ?? 54339) : (process.env.DRABYARD_PG_PORT ?? 54329));
     cluster = await ensureCluster({ dataDir: path.join(root, '.data', test ? 'pg-test' : 'pg'), port, fast: test });
-    databaseUrl = cluster.adminUrl(test ? 'drabyard_test' : 'drabyard');
+    // Each test run gets its own fresh database, so runs side by side never disturb each other.
+    databaseUrl = cluster.adminUrl(test ? `drabyard_test_${process.pid}` : 'drabyard');
   }
   await ensureDatabase(databaseUrl, { fresh: test });
   await runMigrations(databaseUrl);
@@ -177,7 +178,8 @@ async function test() {
   const extra = process.argv.slice(3);
   await runStep('vitest (unit, component, integration, e2e)', bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extra], env);
   await mail.close();
-  cluster?.stop();
+  const { othersRunning } = await dropDatabase(databaseUrl);
+  if (othersRunning === 0) cluster?.stop();
   let passed = 0;
   let failed = 0;
   let skipped = 0;
