@@ -64,6 +64,8 @@ export default defineConfig({
           testTimeout: 30_000,
           hookTimeout: 60_000,
           maxWorkers: 2,
+          // Projects with their own worker limits run as separate groups, one after the other.
+          sequence: { groupOrder: 1 },
         },
       },
       {
@@ -76,6 +78,7 @@ export default defineConfig({
           testTimeout: 120_000,
           hookTimeout: 180_000,
           fileParallelism: false,
+          sequence: { groupOrder: 2 },
         },
       },
     ],

@@ -28,7 +28,7 @@ export function measureBundle(distDir = 'dist/client') {
   const initialKb = [...initial].reduce((sum, k) => sum + gz(manifest[k].file), 0);
   const routes = Object.entries(manifest)
     .filter(([k, c]) => c.isDynamicEntry && !initial.has(k))
-    .map(([k, c]) => {
+    .map(([k]) => {
       // a route chunk plus the shared chunks it needs that the initial load did not bring
       const extra = [...staticClosure(k)].filter((x) => !initial.has(x));
       return { name: k, kb: extra.reduce((sum, x) => sum + gz(manifest[x].file), 0) };

@@ -170,7 +170,8 @@ async function test() {
   if (!process.env.DRABYARD_QUICK) {
     checks.push(['typecheck', await runStep('typecheck', bin('tsc'), ['--noEmit', '-p', 'tsconfig.json'], env)]);
     checks.push(['lint', await runStep('lint', bin('eslint'), ['-c', 'scripts/eslint.config.js', '.', '--max-warnings=0'], env)]);
-    checks.push(['build', await runStep('client build', bin('vite'), ['build', '--logLevel', 'warn'], env)]);
+    // The client is always built for production (NODE_ENV=test would bundle React's development build).
+    checks.push(['build', await runStep('client build', bin('vite'), ['build', '--logLevel', 'warn'], { ...env, NODE_ENV: 'production' })]);
     checks.push(['page weight', await runStep('page-weight budget', bin('tsx'), ['scripts/check-bundle.ts'], env)]);
   }
   const report = path.join(artifacts, 'vitest.json');

@@ -68,6 +68,11 @@ export function createApp(e: Env = env()): Express {
   api.use((req, _res, next) => next(new AppError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);
 
+  // Listing photos in the local folder (S3 serves its own). Keys are unique per upload, so they cache forever.
+  if (!e.S3_BUCKET?.trim()) {
+    app.use('/media', express.static(path.resolve(e.MEDIA_DIR), { index: false, dotfiles: 'deny', immutable: true, maxAge: '1y', fallthrough: false }));
+  }
+
   const clientDir = path.resolve(e.CLIENT_DIST);
   if (existsSync(path.join(clientDir, 'index.html'))) {
     app.use('/assets', express.static(path.join(clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));

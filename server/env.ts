@@ -24,10 +24,21 @@ const envSchema = z.object({
   STRIPE_API_HOST: z.string().optional(),
   STRIPE_API_PORT: z.coerce.number().int().optional(),
   STRIPE_API_PROTOCOL: z.enum(['http', 'https']).optional(),
+  /** How long stock is held for an unpaid checkout; Stripe accepts 30 minutes to 24 hours for a session. */
+  CHECKOUT_HOLD_MINUTES: z.coerce.number().int().min(30).max(1440).default(30),
+  /** How often the sweeper releases stock of expired checkouts and retries unpaid transfers; 0 turns it off. */
+  STOCK_SWEEP_SECONDS: z.coerce.number().int().min(0).default(60),
   MEDIA_DIR: z.string().default('.data/media'),
   S3_BUCKET: z.string().optional(),
   S3_ENDPOINT: z.string().optional(),
   S3_REGION: z.string().optional(),
+  S3_FORCE_PATH_STYLE: z.string().optional(),
+  S3_ACCESS_KEY_ID: z.string().optional(),
+  S3_SECRET_ACCESS_KEY: z.string().optional(),
+  S3_PUBLIC_BASE_URL: z.string().optional(),
+  S3_KEY_PREFIX: z.string().optional(),
+  /** URL prefix the local photo folder is served under (local storage only). */
+  MEDIA_URL_BASE: z.string().default('/media'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   CLIENT_DIST: z.string().default('dist/client'),
   LOGIN_MAX_FAILURES: z.coerce.number().int().min(1).default(5),

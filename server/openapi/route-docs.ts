@@ -12,6 +12,11 @@ import {
   updateLineInput,
   updatePartInput,
 } from '../../shared/schemas/catalog';
+import {
+  adminListingsQuery, bulkApproveInput, createListingInput, importCommitInput, importPreviewInput, linkPartInput,
+  listingDecisionInput, myListingsQuery, photoOrderInput, publicListingsQuery, shippingProfileInput, shopProfileInput,
+  updateListingInput, updateShippingProfileInput,
+} from '../../shared/schemas/listings';
 
 export interface RouteDoc {
   method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -62,4 +67,29 @@ export const routeDocs: RouteDoc[] = [
   { method: 'PATCH', path: '/api/admin/lines/:id', summary: 'Change a bill-of-materials line (admin, audited)', body: updateLineInput },
   { method: 'DELETE', path: '/api/admin/lines/:id', summary: 'Delete a bill-of-materials line (admin, audited)' },
   { method: 'GET', path: '/api/admin/data-quality', summary: 'Catalog data-quality report (admin)' },
+  { method: 'GET', path: '/api/listings', summary: 'Live listings of catalog parts (?partId=a,b), cheapest first: {listings}', query: publicListingsQuery },
+  { method: 'GET', path: '/api/listings/:id', summary: 'Listing page: listing, condition explained, seller card, part with chain, cautions, shipping; private states for the seller and admins only', responses: { 200: '{listing, condition, seller, part, cautions, shipping, viewer, events?}', 404: 'Not found or not visible' } },
+  { method: 'POST', path: '/api/listings', summary: 'Create a draft listing (seller, audited)', body: createListingInput, responses: { 201: '{listing}', 400: 'Validation failed' } },
+  { method: 'PATCH', path: '/api/listings/:id', summary: 'Edit an own listing; part, condition, title or photos send a live listing back to review', body: updateListingInput, responses: { 200: '{listing}', 403: 'Another seller\'s live listing', 404: 'Not found', 409: 'Not editable in this state' } },
+  { method: 'DELETE', path: '/api/listings/:id', summary: 'Delete an own draft that was never submitted', responses: { 204: 'Deleted', 409: 'Not a fresh draft' } },
+  { method: 'POST', path: '/api/listings/:id/submit', summary: 'Submit for review; automatic flags are computed', responses: { 200: '{listing} with flags', 409: 'Wrong state' } },
+  { method: 'POST', path: '/api/listings/:id/withdraw', summary: 'Withdraw an own listing', responses: { 200: '{listing}' } },
+  { method: 'POST', path: '/api/listings/:id/reopen', summary: 'Reopen a withdrawn listing as a draft', responses: { 200: '{listing}' } },
+  { method: 'POST', path: '/api/listings/:id/photos', summary: 'Add photos (field "photos", at most 12 files of 15 MB; all or nothing)', bodyType: 'multipart/form-data', responses: { 201: '{listing, photos}', 400: 'Corrupt image, too many files or wrong field', 413: 'File or image too large', 415: 'Not a JPEG, PNG or WebP' } },
+  { method: 'PUT', path: '/api/listings/:id/photos/order', summary: 'Set the order of a listing\'s photos', body: photoOrderInput, responses: { 200: '{photos}' } },
+  { method: 'DELETE', path: '/api/listings/:id/photos/:photoId', summary: 'Remove a photo (a live listing goes back to review)', responses: { 200: '{listing}' } },
+  { method: 'GET', path: '/api/me/listings', summary: 'Seller dashboard: own listings (filter, sort, page) and counts by state', query: myListingsQuery, responses: { 200: '{listings, counts, total, page, pageSize}' } },
+  { method: 'GET', path: '/api/me/listings/import/template', summary: 'CSV template for the bulk import', responses: { 200: 'text/csv' } },
+  { method: 'POST', path: '/api/me/listings/import/preview', summary: 'Bulk import step 1-2: column mapping and per-row errors (JSON {csv, mapping} or multipart field "file")', body: importPreviewInput, responses: { 200: '{headers, mapping, fields, rows, summary}' } },
+  { method: 'POST', path: '/api/me/listings/import', summary: 'Bulk import: create the rows as drafts or submitted, in one transaction', body: importCommitInput, responses: { 201: '{created, listingIds, as, skipped}', 400: 'Rows with errors (details.rows)' } },
+  { method: 'GET', path: '/api/me/shop', summary: 'The seller\'s shop profile', responses: { 200: '{shop|null}' } },
+  { method: 'PUT', path: '/api/me/shop', summary: 'Save the shop profile (audited)', body: shopProfileInput, responses: { 200: '{shop}' } },
+  { method: 'GET', path: '/api/me/shipping-profiles', summary: 'The seller\'s shipping profiles', responses: { 200: '{profiles}' } },
+  { method: 'POST', path: '/api/me/shipping-profiles', summary: 'Create a shipping profile (rules checked by the shipping domain schema)', body: shippingProfileInput, responses: { 201: '{profile}' } },
+  { method: 'PATCH', path: '/api/me/shipping-profiles/:id', summary: 'Change a shipping profile', body: updateShippingProfileInput, responses: { 200: '{profile}' } },
+  { method: 'DELETE', path: '/api/me/shipping-profiles/:id', summary: 'Delete a shipping profile', responses: { 204: 'Deleted' } },
+  { method: 'GET', path: '/api/admin/listings', summary: 'Review queue (admin): filter by state, flag, seller and age', query: adminListingsQuery, responses: { 200: '{listings} with flags, seller, waitingHours' } },
+  { method: 'POST', path: '/api/admin/listings/approve', summary: 'Approve many unflagged submitted listings (admin)', body: bulkApproveInput, responses: { 200: '{approved, skipped}' } },
+  { method: 'POST', path: '/api/admin/listings/:id/decision', summary: 'Approve, request changes (message) or reject (reason); the seller is mailed (admin, audited)', body: listingDecisionInput, responses: { 200: '{listing}', 409: 'Wrong state or a blocking flag' } },
+  { method: 'POST', path: '/api/admin/listings/:id/part', summary: 'Link a listing (e.g. an unidentified part) to a catalog part (admin, audited)', body: linkPartInput, responses: { 200: '{listing}' } },
 ];

@@ -1,7 +1,11 @@
 import { Router } from 'express';
 import { authRouter } from './auth';
+import { docsRouter } from './docs';
+import { adminListingsRouter } from './admin-listings';
 import { adminCatalogRouter, catalogRouter } from './catalog';
 import { healthRouter } from './health';
+import { listingsRouter, myListingsRouter } from './listings';
+import { sellerRouter } from './seller';
 import { adminSellerApplicationsRouter, sellerApplicationsRouter } from './seller-applications';
 
 /**
@@ -11,10 +15,15 @@ import { adminSellerApplicationsRouter, sellerApplicationsRouter } from './selle
  */
 export const mounts: Array<readonly [string, Router]> = [
   ['/health', healthRouter],
+  ['/', docsRouter],
   ['/auth', authRouter],
   ['/seller-applications', sellerApplicationsRouter],
   ['/admin/seller-applications', adminSellerApplicationsRouter],
   ['/admin', adminCatalogRouter],
+  ['/listings', listingsRouter],
+  ['/me/listings', myListingsRouter],
+  ['/me', sellerRouter],
+  ['/admin/listings', adminListingsRouter],
 ];
 
 /** Routers mounted last, after every helper's entries above. */
