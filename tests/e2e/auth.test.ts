@@ -63,8 +63,7 @@ describe('accounts in the browser', () => {
 
     await page.goto(`${baseUrl}/account`);
     await page.getByText('seller', { exact: false }).first().waitFor();
-    await expect(page.getByRole('link', { name: 'Seller desk' })).toBeDefined();
-    await page.getByRole('link', { name: 'Seller desk' }).waitFor();
+    await page.getByRole('link', { name: 'Seller desk', exact: true }).waitFor();
     await page.screenshot({ path: path.join(SCREENSHOTS, 'account-seller.png') });
     expect(b.errors).toEqual([]);
   });
