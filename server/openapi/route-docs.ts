@@ -18,6 +18,9 @@ import {
   updateListingInput, updateShippingProfileInput,
 } from '../../shared/schemas/listings';
 
+import { addCartItemInput, cartQuery, checkoutInput, refundInput, sellerOrdersQuery, shipInput, statementQuery, updateCartItemInput } from '../../shared/schemas/orders';
+import { garageRouteDocs } from '../routes/garage';
+
 export interface RouteDoc {
   method: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
   /** Express-style path, e.g. /api/parts/:id */
@@ -92,4 +95,22 @@ export const routeDocs: RouteDoc[] = [
   { method: 'POST', path: '/api/admin/listings/approve', summary: 'Approve many unflagged submitted listings (admin)', body: bulkApproveInput, responses: { 200: '{approved, skipped}' } },
   { method: 'POST', path: '/api/admin/listings/:id/decision', summary: 'Approve, request changes (message) or reject (reason); the seller is mailed (admin, audited)', body: listingDecisionInput, responses: { 200: '{listing}', 409: 'Wrong state or a blocking flag' } },
   { method: 'POST', path: '/api/admin/listings/:id/part', summary: 'Link a listing (e.g. an unidentified part) to a catalog part (admin, audited)', body: linkPartInput, responses: { 200: '{listing}' } },
+  ...garageRouteDocs,
+  { method: 'GET', path: '/api/cart', summary: 'The cart (signed in, or the anonymous cookie cart): groups per seller, shipping quotes, totals in cents, warnings', query: cartQuery },
+  { method: 'POST', path: '/api/cart/items', summary: 'Add units of a live listing, capped by stock (creates the anonymous cart cookie when signed out)', body: addCartItemInput, query: cartQuery, responses: { 201: 'The cart', 404: 'No such live listing', 409: 'Sold out or own listing' } },
+  { method: 'PATCH', path: '/api/cart/items/:listingId', summary: 'Set the quantity of a cart line, capped by stock', body: updateCartItemInput, query: cartQuery, responses: { 200: 'The cart', 404: 'Not in the cart' } },
+  { method: 'DELETE', path: '/api/cart/items/:listingId', summary: 'Remove a cart line', query: cartQuery, responses: { 200: 'The cart', 404: 'Not in the cart' } },
+  { method: 'POST', path: '/api/checkout', summary: 'Reserve the stock of the whole cart and open one Stripe Checkout Session: {orderId, url}', body: checkoutInput, responses: { 201: '{orderId, url}', 400: 'Empty cart or below the card minimum', 401: 'Not signed in', 409: 'Out of stock (details.outOfStock) or shipping refused (details.shipping)', 503: 'Payment could not be started; stock released' } },
+  { method: 'GET', path: '/api/orders', summary: "The buyer's orders, newest first" },
+  { method: 'GET', path: '/api/orders/:id', summary: "One order with sub-orders per seller, lines and refunds (the buyer's own, or any for an admin)", responses: { 200: '{order}', 404: 'Not found or not yours' } },
+  { method: 'POST', path: '/api/orders/:id/cancel', summary: 'Give up an unpaid checkout: the session is expired and the stock released', responses: { 200: '{order}', 409: 'Not an unpaid checkout' } },
+  { method: 'GET', path: '/api/seller/orders', summary: "The seller's paid sub-orders (seller)", query: sellerOrdersQuery },
+  { method: 'GET', path: '/api/seller/orders/:subOrderId', summary: 'One of the seller\'s sub-orders with buyer, destination, fee, share and transfer (seller)', responses: { 200: '{subOrder}', 404: 'Not found or not yours' } },
+  { method: 'POST', path: '/api/seller/orders/:subOrderId/ship', summary: 'Mark shipped with carrier and tracking; mails the buyer (seller)', body: shipInput, responses: { 200: '{subOrder}', 409: 'Not paid, already shipped, or a pickup' } },
+  { method: 'POST', path: '/api/seller/orders/:subOrderId/deliver', summary: 'Mark delivered (after shipping, or a pickup handed over) (seller)', responses: { 200: '{subOrder}', 409: 'Not shipped yet' } },
+  { method: 'GET', path: '/api/seller/payouts', summary: 'Payout onboarding state and money in transfers, with recent transfers (seller)' },
+  { method: 'POST', path: '/api/seller/payouts/onboarding', summary: "Create the seller's connected account if needed and return a fresh onboarding link: {url} (seller)", responses: { 200: '{url}', 409: 'No shop profile, or already onboarded' } },
+  { method: 'GET', path: '/api/seller/statements', summary: 'Monthly payout statement (sales, shipping, fees, refunds, net); format=csv downloads it (seller)', query: statementQuery },
+  { method: 'POST', path: '/api/admin/orders/:id/refund', summary: 'Refund a paid order in whole or part through Stripe, restocking when asked (admin, audited)', body: refundInput, responses: { 200: '{order}', 400: 'More than is left, or a foreign line', 409: 'Not refundable, or the processor refused' } },
+  { method: 'POST', path: '/api/webhooks/stripe', summary: 'Stripe events, verified by the Stripe-Signature header on the raw body; each event id is processed once', bodyType: 'application/octet-stream', responses: { 200: '{received, duplicate, type}', 400: 'Bad or stale signature', 503: 'Not ready; Stripe retries' } },
 ];

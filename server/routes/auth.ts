@@ -5,6 +5,7 @@ import { publicRoute, requireUser } from '../auth/require-role';
 import { unauthenticated } from '../errors';
 import { parseBody } from '../lib/validate';
 import * as auth from '../services/auth';
+import { mergeAnonymousCart } from '../services/cart';
 import type { SessionUser } from '../auth/require-role';
 
 export const authRouter = Router();
@@ -18,6 +19,7 @@ authRouter.post('/register', publicRoute, async (req, res) => {
   const input = parseBody(registerInput, req);
   const user = await auth.register(input);
   await logIn(req, user);
+  await mergeAnonymousCart(req, res, user.id);
   res.status(201).json({ user });
 });
 
@@ -28,6 +30,7 @@ authRouter.post('/login', publicRoute, async (req, res, next) => {
   );
   if (!user) throw unauthenticated('E-mail or password is not right');
   await logIn(req, user);
+  await mergeAnonymousCart(req, res, user.id);
   res.json({ user });
 });
 

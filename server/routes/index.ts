@@ -1,9 +1,19 @@
 import { Router } from 'express';
+import { alertsRouter } from './alerts';
+import { garageRouter } from './garage';
+import { noticesRouter } from './notices';
 import { authRouter } from './auth';
+import { cartRouter } from './cart';
+import { checkoutRouter } from './checkout';
+import { adminOrdersRouter, ordersRouter } from './orders';
+import { sellerPayoutsRouter } from './payouts';
+import { sellerOrdersRouter } from './seller-orders';
+import { webhooksRouter } from './webhooks';
 import { docsRouter } from './docs';
 import { adminListingsRouter } from './admin-listings';
 import { adminCatalogRouter, catalogRouter } from './catalog';
 import { healthRouter } from './health';
+import { searchRouter } from './search';
 import { listingsRouter, myListingsRouter } from './listings';
 import { sellerRouter } from './seller';
 import { adminSellerApplicationsRouter, sellerApplicationsRouter } from './seller-applications';
@@ -24,6 +34,17 @@ export const mounts: Array<readonly [string, Router]> = [
   ['/me/listings', myListingsRouter],
   ['/me', sellerRouter],
   ['/admin/listings', adminListingsRouter],
+  ['/garage', garageRouter],
+  ['/alerts', alertsRouter],
+  ['/notices', noticesRouter],
+  ['/cart', cartRouter],
+  ['/checkout', checkoutRouter],
+  ['/orders', ordersRouter],
+  ['/seller/orders', sellerOrdersRouter],
+  ['/seller', sellerPayoutsRouter],
+  ['/admin/orders', adminOrdersRouter],
+  ['/webhooks/stripe', webhooksRouter],
+  ['/search', searchRouter],
 ];
 
 /** Routers mounted last, after every helper's entries above. */

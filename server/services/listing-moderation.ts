@@ -14,6 +14,7 @@ import { AppError, forbidden, invalidState } from '../errors';
 import { logger } from '../lib/logger';
 import { composeMail, sendMail } from '../lib/mailer';
 import { refreshFlags } from './listing-flags';
+import { onListingLive } from './wanted-alerts';
 import type { Tx } from './listing-photos';
 import { lockListing, nextState, recordChange, stateStamps, toDto, toDtos, type ListingDto, type ListingRow } from './listings';
 
@@ -95,7 +96,7 @@ async function decideIn(tx: Tx, admin: SessionUser, id: string, decision: Decisi
 }
 
 async function mailDecision(d: Decided, decision: Decision, message: string | null) {
-  const url = `${env().APP_ORIGIN}/sell/listings/${d.listing.id}`;
+  const url = `${env().APP_ORIGIN}/seller/listings/${d.listing.id}/edit`;
   const title = `"${d.listing.title}"`;
   const mail =
     decision === 'approve'
@@ -118,6 +119,7 @@ export async function decide(admin: SessionUser, id: string, input: ListingDecis
   const message = input.message?.trim() || null;
   const d = await getDb().transaction((tx) => decideIn(tx, admin, id, input.decision, message));
   await mailDecision(d, input.decision, message);
+  if (d.listing.state === 'approved') await onListingLive(d.listing.id);
   return toDto(d.listing, { withFlags: true });
 }
 
@@ -154,7 +156,10 @@ export async function approveMany(admin: SessionUser, ids: string[]) {
       throw err;
     }
   }
-  for (const d of approved) await mailDecision(d, 'approve', null);
+  for (const d of approved) {
+    await mailDecision(d, 'approve', null);
+    await onListingLive(d.listing.id);
+  }
   return { approved: approved.map((d) => d.listing.id), skipped };
 }
 

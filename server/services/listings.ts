@@ -18,6 +18,7 @@ import { audit } from '../lib/audit';
 import { getPart, primaryNumbers, setLiveListingCounter } from './catalog';
 import { inferDescriptionFormat, renderDescription } from './listing-description';
 import { flagsOf, refreshFlags, type FlagDto } from './listing-flags';
+import { onListingLive } from './wanted-alerts';
 import {
   allKeysOf,
   deleteKeys,
@@ -195,8 +196,10 @@ const REVIEW_FIELD: Record<keyof UpdateListing, string> = {
 };
 
 export async function updateListing(user: SessionUser, id: string, input: UpdateListing): Promise<ListingRow> {
-  return getDb().transaction(async (tx) => {
+  let wasSoldOut = false;
+  const row = await getDb().transaction(async (tx) => {
     const before = await lockOwned(tx, user, id);
+    wasSoldOut = before.state === 'sold_out';
     const set: Partial<typeof listings.$inferInsert> = {};
     const changed = new Set<string>();
     const mark = (k: keyof UpdateListing) => changed.add(REVIEW_FIELD[k]);
@@ -247,6 +250,9 @@ export async function updateListing(user: SessionUser, id: string, input: Update
     if (after.state === 'submitted') await refreshFlags(tx, after);
     return after;
   });
+  // Restocked: live again, so wanted alerts may match it now (queued after the commit).
+  if (wasSoldOut && row.state === 'approved') await onListingLive(row.id);
+  return row;
 }
 
 /** Deletes a draft that was never submitted, with its photos. */
