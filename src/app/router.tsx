@@ -31,6 +31,9 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           children: [
             { index: true, lazy: () => import('./routes/home').then((m) => ({ Component: m.HomeRoute })) },
             { path: rel(paths.catalog.path), lazy: () => import('./routes/catalog/catalog').then((m) => ({ Component: m.CatalogRoute })) },
+            { path: rel(paths.catalogVehicle.path), lazy: () => import('./routes/catalog/vehicle').then((m) => ({ Component: m.CatalogVehicleRoute })) },
+            { path: rel(paths.catalogAssembly.path), lazy: () => import('./routes/catalog/assembly').then((m) => ({ Component: m.CatalogAssemblyRoute })) },
+            { path: rel(paths.catalogPart.path), lazy: () => import('./routes/catalog/part').then((m) => ({ Component: m.CatalogPartRoute })) },
             { path: rel(paths.search.path), lazy: () => import('./routes/search/search').then((m) => ({ Component: m.SearchRoute })) },
             { path: rel(paths.auth.signIn.path), lazy: () => import('./routes/auth/sign-in').then((m) => ({ Component: m.SignInRoute })) },
             { path: rel(paths.auth.register.path), lazy: () => import('./routes/auth/register').then((m) => ({ Component: m.RegisterRoute })) },
@@ -66,6 +69,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
                   element: <RequireRole role="admin" />,
                   children: [
                     { index: true, lazy: () => import('./routes/admin/admin-index').then((m) => ({ Component: m.AdminIndexRoute })) },
+                    { path: 'catalog', lazy: () => import('./routes/admin/catalog').then((m) => ({ Component: m.AdminCatalogRoute })) },
+                    {
+                      path: 'catalog/assemblies',
+                      lazy: () => import('./routes/admin/catalog-assemblies').then((m) => ({ Component: m.AdminCatalogAssembliesRoute })),
+                    },
+                    { path: 'catalog/quality', lazy: () => import('./routes/admin/catalog-quality').then((m) => ({ Component: m.AdminCatalogQualityRoute })) },
                     {
                       path: 'seller-applications',
                       lazy: () => import('./routes/admin/seller-applications').then((m) => ({ Component: m.AdminSellerApplicationsRoute })),

@@ -1,4 +1,4 @@
-import { ChevronRight, Store } from 'lucide-react';
+import { ChevronRight, ClipboardCheck, ListChecks, NotebookPen, Store } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import { ContentLayout } from '@/components/layouts/content-layout';
 import { paths } from '@/config/paths';
@@ -9,6 +9,24 @@ const sections = [
     Icon: Store,
     title: 'Seller applications',
     text: 'Approve or reject people who want to sell.',
+  },
+  {
+    to: paths.admin.listings.getHref(),
+    Icon: ListChecks,
+    title: 'Listing review',
+    text: 'Approve, send back or reject listings waiting for review; approve unflagged ones in bulk.',
+  },
+  {
+    to: paths.admin.catalog.getHref(),
+    Icon: NotebookPen,
+    title: 'Catalog editor',
+    text: 'Parts and their numbers, supersessions, assemblies and parts-list lines.',
+  },
+  {
+    to: paths.admin.catalogQuality.getHref(),
+    Icon: ClipboardCheck,
+    title: 'Catalog data quality',
+    text: 'Supersession loops, numbers on several parts, unused parts, overlapping lines.',
   },
 ];
 

@@ -1,9 +1,14 @@
-import { ComingSoon } from '@/components/layouts/coming-soon';
+import { ContentLayout } from '@/components/layouts/content-layout';
+import { VehicleList } from '@/features/catalog/components/vehicle-list';
 
 export function CatalogRoute() {
   return (
-    <ComingSoon title="Catalog" eyebrow="Vehicle · system · assembly">
-      <p>Browse by vehicle model, then system and assembly, down to each line of the parts list.</p>
-    </ComingSoon>
+    <ContentLayout
+      title="Catalog"
+      eyebrow="Vehicle · system · assembly"
+      description="Pick a vehicle model, then a system and an assembly, down to each line of its parts list."
+    >
+      <VehicleList />
+    </ContentLayout>
   );
 }
