@@ -61,8 +61,8 @@ function runStep(label: string, cmd: string, args: string[], env: NodeJS.Process
   });
 }
 
-function seed(databaseUrl: string) {
-  return runStep('seeding demo data (idempotent)', bin('tsx'), [path.join(root, 'server', 'db', 'seed', 'index.ts')], { ...process.env, DATABASE_URL: databaseUrl });
+function seed(databaseUrl: string, extraEnv: NodeJS.ProcessEnv = {}) {
+  return runStep('seeding demo data (idempotent)', bin('tsx'), [path.join(root, 'server', 'db', 'seed', 'index.ts')], { ...process.env, ...extraEnv, DATABASE_URL: databaseUrl });
 }
 
 async function start(dev: boolean) {
@@ -145,7 +145,10 @@ async function test() {
   const started = Date.now();
   await ensureDebianTools();
   const { cluster, databaseUrl } = await provision('test');
-  if (!(await seed(databaseUrl))) {
+  // Demo photos go where the test app serves media from.
+  const mediaDir = path.join(root, '.data', `media-test-${process.pid}`);
+  rmSync(mediaDir, { recursive: true, force: true });
+  if (!(await seed(databaseUrl, { MEDIA_DIR: mediaDir }))) {
     cluster?.stop();
     process.exit(1);
   }
@@ -160,9 +163,8 @@ async function test() {
     MAIL_FAKE_URL: mail.httpUrl,
     STRIPE_WEBHOOK_SECRET: webhookSecret,
     APP_ORIGIN: 'http://localhost:3000',
-    MEDIA_DIR: path.join(root, '.data', 'media-test'),
+    MEDIA_DIR: mediaDir,
   };
-  rmSync(env.MEDIA_DIR as string, { recursive: true, force: true });
   const artifacts = path.join(root, 'tests', '.artifacts');
   mkdirSync(artifacts, { recursive: true });
   const checks: Array<[string, boolean]> = [];
@@ -179,6 +181,7 @@ async function test() {
   const extra = process.argv.slice(3);
   await runStep('vitest (unit, component, integration, e2e)', bin('vitest'), ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extra], env);
   await mail.close();
+  rmSync(mediaDir, { recursive: true, force: true });
   const { othersRunning } = await dropDatabase(databaseUrl);
   if (othersRunning === 0) cluster?.stop();
   let passed = 0;
