@@ -19,6 +19,7 @@ import {
 } from '../../shared/schemas/listings';
 
 import { addCartItemInput, cartQuery, checkoutInput, refundInput, sellerOrdersQuery, shipInput, statementQuery, updateCartItemInput } from '../../shared/schemas/orders';
+import { searchQuery, suggestQuery } from '../../shared/schemas/search';
 import { garageRouteDocs } from '../routes/garage';
 
 export interface RouteDoc {
@@ -96,6 +97,8 @@ export const routeDocs: RouteDoc[] = [
   { method: 'POST', path: '/api/admin/listings/:id/decision', summary: 'Approve, request changes (message) or reject (reason); the seller is mailed (admin, audited)', body: listingDecisionInput, responses: { 200: '{listing}', 409: 'Wrong state or a blocking flag' } },
   { method: 'POST', path: '/api/admin/listings/:id/part', summary: 'Link a listing (e.g. an unidentified part) to a catalog part (admin, audited)', body: linkPartInput, responses: { 200: '{listing}' } },
   ...garageRouteDocs,
+  { method: 'GET', path: '/api/search', summary: 'One query box over catalog parts and live listings: numbers in any shape (supersession-aware, with the fit note), words ranked by relevance, disjunctive facets, keyset pages', query: searchQuery, responses: { 200: '{total, totalIsEstimate, hits, facets, nextCursor, didYouMean}', 400: 'Unknown filter value or parameter, tampered cursor' } },
+  { method: 'GET', path: '/api/search/suggest', summary: 'Up to 10 parts and numbers as the user types', query: suggestQuery },
   { method: 'GET', path: '/api/cart', summary: 'The cart (signed in, or the anonymous cookie cart): groups per seller, shipping quotes, totals in cents, warnings', query: cartQuery },
   { method: 'POST', path: '/api/cart/items', summary: 'Add units of a live listing, capped by stock (creates the anonymous cart cookie when signed out)', body: addCartItemInput, query: cartQuery, responses: { 201: 'The cart', 404: 'No such live listing', 409: 'Sold out or own listing' } },
   { method: 'PATCH', path: '/api/cart/items/:listingId', summary: 'Set the quantity of a cart line, capped by stock', body: updateCartItemInput, query: cartQuery, responses: { 200: 'The cart', 404: 'Not in the cart' } },

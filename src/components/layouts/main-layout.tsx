@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
 import { useNavigation } from 'react-router-dom';
 import type { User } from '@shared/schemas/auth';
+import { HeaderSearch } from '@/features/search/components/header-search';
 import { AccountMenu } from './account-menu';
 import { Footer } from './footer';
-import { SearchBox } from './search-box';
 import { SiteNav } from './site-nav';
 import { Wordmark } from './wordmark';
 
@@ -35,7 +35,7 @@ export function MainLayout({ user, isUserPending, onSignOut, isSigningOut, child
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-3 px-4 py-3 sm:px-6">
           <Wordmark />
           <div className="order-3 w-full sm:order-none sm:w-auto sm:flex-1">
-            <SearchBox />
+            <HeaderSearch />
           </div>
           <div className="ml-auto">
             <AccountMenu user={user} isPending={isUserPending} onSignOut={onSignOut} isSigningOut={isSigningOut} />

@@ -1,13 +1,11 @@
 import { useSearchParams } from 'react-router-dom';
-import { ComingSoon } from '@/components/layouts/coming-soon';
+import { PartListingsRedirect } from '@/features/search/components/part-listings-redirect';
+import { SearchPage } from '@/features/search/components/search-page';
 
 export function SearchRoute() {
   const [params] = useSearchParams();
-  const q = params.get('q')?.trim();
-  return (
-    <ComingSoon title="Search" eyebrow="Parts and numbers">
-      {q ? <p>Results for “{q}” will show here.</p> : null}
-      <p>Search will find parts by any number they carry, typed in any shape, and by name.</p>
-    </ComingSoon>
-  );
+  const partId = params.get('part');
+  // The part page links here with ?part=<id>: that becomes a search for the part's number.
+  if (partId && !params.get('q')) return <PartListingsRedirect key={partId} partId={partId} />;
+  return <SearchPage />;
 }

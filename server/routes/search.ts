@@ -1,0 +1,15 @@
+import { Router } from 'express';
+import { searchQuery, suggestQuery } from '../../shared/schemas/search';
+import { publicRoute } from '../auth/require-role';
+import { parseQuery } from '../lib/validate';
+import { search, suggest } from '../services/search';
+
+export const searchRouter = Router();
+
+searchRouter.get('/', publicRoute, async (req, res) => {
+  res.json(await search(parseQuery(searchQuery, req)));
+});
+
+searchRouter.get('/suggest', publicRoute, async (req, res) => {
+  res.json(await suggest(parseQuery(suggestQuery, req).q));
+});

@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest';
+import { foldKey } from '../domain/part-number';
+import { correctableWords, nearFoldedKeys, parseTextQuery } from './search-text';
+
+describe('parseTextQuery', () => {
+  it('when the query holds tsquery operators and quotes, then they only separate words', () => {
+    const chunks = parseTextQuery(`"rear" & !axle | (brake:*) <-> line`);
+    expect(chunks.flatMap((c) => c.words)).toEqual(['rear', 'axle', 'brake', 'line']);
+    expect(chunks.every((c) => c.key === null)).toBe(true);
+  });
+
+  it('when a chunk has a digit, then it also carries the number keys from the domain functions', () => {
+    const [c] = parseTextQuery('KV-2O41-b');
+    expect(c.words).toEqual(['kv', '2o41', 'b']);
+    expect(c.key).toBe('kv2o41b');
+    expect(c.folded).toBe(foldKey('KV2O41B').toLowerCase());
+  });
+
+  it('when the query is long, then at most eight chunks are kept and only plain words are corrected', () => {
+    expect(parseTextQuery('a b c d e f g h i j k').length).toBe(8);
+    expect(correctableWords(parseTextQuery('brke 12ab of line'))).toEqual(['brke', 'line']);
+  });
+});
+
+describe('nearFoldedKeys', () => {
+  it('when a key has one wrong, missing, extra or swapped character, then the right key is among its neighbours', () => {
+    const right = foldKey('QX4410B7');
+    for (const typo of ['QX4410B8', 'QX440B7', 'QX44100B7', 'QX4140B7']) expect(nearFoldedKeys(foldKey(typo)), typo).toContain(right);
+  });
+
+  it('when a key is very short or very long, then no neighbours are tried', () => {
+    expect(nearFoldedKeys('A1')).toEqual([]);
+    expect(nearFoldedKeys('1'.repeat(30))).toEqual([]);
+  });
+});
