@@ -1,6 +1,7 @@
 import { useParams } from 'react-router-dom';
 import { PageSkeleton } from '@/components/layouts/page-skeleton';
 import { Notice } from '@/components/ui/notice';
+import { AddToCartButton } from '@/features/cart/components/add-to-cart-button';
 import { useListing } from '@/features/listings/api/get-listing';
 import { ListingView } from '@/features/listings/components/listing-view';
 import { isApiError } from '@/lib/api-client';
@@ -22,7 +23,10 @@ export function ListingRoute() {
   return (
     <>
       <title>{`${page.data.listing.title} · Drabyard`}</title>
-      <ListingView page={page.data} />
+      <ListingView
+        page={page.data}
+        buySlot={<AddToCartButton listingId={page.data.listing.id} available={page.data.listing.state === 'approved' ? page.data.listing.quantity : 0} />}
+      />
     </>
   );
 }

@@ -1,4 +1,4 @@
-import { FileSpreadsheet, Plus, Store } from 'lucide-react';
+import { Banknote, FileSpreadsheet, Package, Plus, Store } from 'lucide-react';
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { listingStateCodes, type ListingStateCode } from '@shared/schemas/listings';
@@ -47,6 +47,12 @@ export function SellerDeskRoute() {
       description="Your listings and where each stands. Quick-edit stock and prices; a live listing stays live."
       actions={
         <>
+          <Link to={paths.sellerOrders.list.getHref()} className={buttonClasses('ghost', 'sm')}>
+            <Package aria-hidden="true" className="size-4" /> Orders
+          </Link>
+          <Link to={paths.sellerOrders.payouts.getHref()} className={buttonClasses('ghost', 'sm')}>
+            <Banknote aria-hidden="true" className="size-4" /> Payouts
+          </Link>
           <Link to={paths.sellerListings.shop.getHref()} className={buttonClasses('ghost', 'sm')}>
             <Store aria-hidden="true" className="size-4" /> Shop and shipping
           </Link>

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Check, MapPin, Package, Pencil, Store, TriangleAlert, Truck } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import { partNumberKindLabels } from '@shared/schemas/catalog';
@@ -23,7 +24,7 @@ const interchangeText: Record<string, string> = {
 const grams = (g: number) => (g >= 1000 ? `${(g / 1000).toLocaleString('en-US', { maximumFractionDigits: 2 })} kg` : `${g} g`);
 
 /** The public listing page: photos, price and condition, what the condition means, the part, seller, cautions. */
-export function ListingView({ page }: { page: ListingPage }) {
+export function ListingView({ page, buySlot }: { page: ListingPage; /** Rendered under the price by the route (the cart feature's button). */ buySlot?: ReactNode }) {
   const { listing, condition, part, cautions, viewer } = page;
   const live = listing.state === 'approved';
   return (
@@ -63,6 +64,7 @@ export function ListingView({ page }: { page: ListingPage }) {
             {listing.quantity > 0 ? `${listing.quantity} available` : 'Sold out'} · {grams(listing.weightGrams)}
             {listing.lengthMm > 0 ? ` · ${listing.lengthMm} × ${listing.widthMm} × ${listing.heightMm} mm` : ''}
           </p>
+          {buySlot && !viewer.isOwner ? <div>{buySlot}</div> : null}
 
           <SellerCardView page={page} />
         </div>
