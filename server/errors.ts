@@ -47,6 +47,20 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   return false;
 }
 
+/** The PostgreSQL SQLSTATE of an error or of one of its causes (drizzle wraps the driver's error). */
+function pgCode(err: unknown): string | undefined {
+  let e: unknown = err;
+  for (let i = 0; i < 4 && e && typeof e === 'object'; i++) {
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === 'string' && /^[0-9A-Z]{5}$/.test(code)) return code;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return undefined;
+}
+
+// Text PostgreSQL cannot store (a NUL character, bytes that are not UTF-8) is the caller's input, not our failure.
+const BAD_TEXT_CODES = new Set(['22021', '22P05']);
+
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   let status = 500;
   let body: { code: string; message: string; details?: unknown } = { code: 'internal', message: 'Something went wrong on our side' };
@@ -63,6 +77,9 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   } else if (err?.type === 'entity.too.large' || err?.status === 413) {
     status = 413;
     body = { code: 'payload_too_large', message: 'The request is too large' };
+  } else if (BAD_TEXT_CODES.has(pgCode(err) ?? '')) {
+    status = 400;
+    body = { code: 'validation_failed', message: 'The text sent contains characters that cannot be stored (such as a NUL character)' };
   } else if (isDatabaseUnavailable(err)) {
     status = 503;
     body = { code: 'service_unavailable', message: 'The database is unavailable right now; please try again in a moment' };
