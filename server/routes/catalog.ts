@@ -15,6 +15,7 @@ import {
   uuidParam,
 } from '../../shared/schemas/catalog';
 import { publicRoute, requireRole } from '../auth/require-role';
+import { clearReadCaches } from '../lib/read-cache';
 import { parseBody, parseParams, parseQuery } from '../lib/validate';
 import * as catalog from '../services/catalog';
 import * as admin from '../services/catalog-admin';
@@ -45,6 +46,11 @@ catalogRouter.get('/parts/:id', publicRoute, async (req, res) => {
 
 export const adminCatalogRouter = Router();
 const isAdmin = requireRole('admin');
+// Any successful catalog edit clears the cached public reads of this process.
+adminCatalogRouter.use((req, res, next) => {
+  if (req.method !== 'GET') res.on('finish', () => res.statusCode < 400 && clearReadCaches());
+  next();
+});
 const twoIds = z.object({ id: z.uuid(), numberId: z.uuid() });
 
 adminCatalogRouter.post('/parts', isAdmin, async (req, res) => {

@@ -11,6 +11,13 @@ import { derivedSpecs } from '../domain/standards/part-specs';
 import { fillersForPart, resolve, indexEdges } from '../domain/supersession';
 import { AppError, notFound } from '../errors';
 import { loadSubgraph } from './catalog-graph';
+import { readCache } from '../lib/read-cache';
+
+// Public reads are cached briefly; catalog edits clear the caches (see catalog-admin.ts).
+const vehicleCache = readCache<Awaited<ReturnType<typeof loadVehicle>>>({ max: 200, ttlMs: 30_000 });
+const assemblyCache = readCache<Awaited<ReturnType<typeof loadAssembly>>>({ max: 2000, ttlMs: 30_000 });
+const partCache = readCache<Awaited<ReturnType<typeof loadPart>>>({ max: 5000, ttlMs: 5_000 });
+const resolveCache = readCache<Awaited<ReturnType<typeof loadResolve>>>({ max: 5000, ttlMs: 30_000 });
 
 type PartRow = typeof parts.$inferSelect;
 type NumberRow = typeof partNumbers.$inferSelect;
@@ -55,7 +62,11 @@ const pickVehicle = (v: typeof vehicleModels.$inferSelect) => ({
   description: v.description,
 });
 
-export async function getVehicle(slug: string) {
+export function getVehicle(slug: string) {
+  return vehicleCache.get(slug, () => loadVehicle(slug));
+}
+
+async function loadVehicle(slug: string) {
   const db = getDb();
   const [v] = await db.select().from(vehicleModels).where(eq(vehicleModels.slug, slug));
   if (!v) throw notFound('Vehicle model');
@@ -92,7 +103,11 @@ export async function getVehicle(slug: string) {
   };
 }
 
-export async function getAssembly(id: string, q: z.infer<typeof assemblyQuery>) {
+export function getAssembly(id: string, q: z.infer<typeof assemblyQuery>) {
+  return assemblyCache.get(JSON.stringify([id, q.serial ?? '', q.buildDate ?? '', q.variant ?? '']), () => loadAssembly(id, q));
+}
+
+async function loadAssembly(id: string, q: z.infer<typeof assemblyQuery>) {
   const db = getDb();
   const [a] = await db.select().from(assemblies).where(eq(assemblies.id, id));
   if (!a) throw notFound('Assembly');
@@ -183,7 +198,11 @@ async function chainFor(partId: string) {
   };
 }
 
-export async function getPart(id: string) {
+export function getPart(id: string) {
+  return partCache.get(id, () => loadPart(id));
+}
+
+async function loadPart(id: string) {
   const db = getDb();
   const [p] = await db.select().from(parts).where(eq(parts.id, id));
   if (!p) throw notFound('Part');
@@ -228,7 +247,11 @@ export function setLiveListingCounter(fn: (partId: string) => Promise<number>) {
 }
 
 /** Number lookup: exact key first, then the O/0 I/1-folded key; then the supersession walk in the domain. */
-export async function resolveNumber(query: string) {
+export function resolveNumber(query: string) {
+  return resolveCache.get(query.trim().toUpperCase(), () => loadResolve(query));
+}
+
+async function loadResolve(query: string) {
   const parsed = parsePartNumber(query);
   if (!parsed.ok) throw new AppError(400, 'validation_failed', parsed.error.message, { fieldErrors: { number: [parsed.error.message] } });
   const { key, folded } = parsed.value;
