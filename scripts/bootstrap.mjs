@@ -2,15 +2,18 @@
 // Entry point of `npm start`, `npm run dev` and `npm test`. Plain JavaScript on purpose: it must run on a
 // fresh clone before node_modules exists, install the dependencies, then hand over to the TypeScript runner.
 import { spawnSync, spawn } from 'node:child_process';
-import { existsSync } from 'node:fs';
+import { existsSync, statSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import path from 'node:path';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const mode = process.argv[2] ?? 'start';
 
-if (!existsSync(path.join(root, 'node_modules', '.bin', 'tsx'))) {
-  console.log('[drabyard] node_modules is missing: running npm ci (first start only)…');
+// Install when node_modules is missing, or when package-lock.json changed since the last install (a pull).
+const installed = path.join(root, 'node_modules', '.package-lock.json');
+const stale = existsSync(installed) && statSync(path.join(root, 'package-lock.json')).mtimeMs > statSync(installed).mtimeMs + 1000;
+if (!existsSync(path.join(root, 'node_modules', '.bin', 'tsx')) || stale) {
+  console.log(`[drabyard] ${stale ? 'package-lock.json changed' : 'node_modules is missing'}: running npm ci…`);
   const lock = existsSync(path.join(root, 'package-lock.json'));
   const r = spawnSync('npm', [lock ? 'ci' : 'install', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
   if (r.status !== 0) {
