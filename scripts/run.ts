@@ -3,7 +3,8 @@
 // watch mode. `test`: a fresh test database, then typecheck, lint, build and every vitest project, ending with
 // one plain summary line.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { runMigrations } from '../server/db/migrate';
@@ -65,6 +66,17 @@ function seed(databaseUrl: string, extraEnv: NodeJS.ProcessEnv = {}) {
   return runStep('seeding demo data (idempotent)', bin('tsx'), [path.join(root, 'server', 'db', 'seed', 'index.ts')], { ...process.env, ...extraEnv, DATABASE_URL: databaseUrl });
 }
 
+/** SESSION_SECRET from the environment, or a random one kept in the git-ignored .data folder for this machine. */
+function localSessionSecret(): string {
+  if (process.env.SESSION_SECRET) return process.env.SESSION_SECRET;
+  const file = path.join(root, '.data', 'session-secret');
+  if (!existsSync(file)) {
+    mkdirSync(path.dirname(file), { recursive: true });
+    writeFileSync(file, randomBytes(32).toString('base64url'), { mode: 0o600 });
+  }
+  return readFileSync(file, 'utf8').trim();
+}
+
 async function start(dev: boolean) {
   const { cluster, databaseUrl } = await provision('app');
   if (!(await seed(databaseUrl))) process.exit(1);
@@ -72,7 +84,7 @@ async function start(dev: boolean) {
   const origin = process.env.APP_ORIGIN ?? `http://localhost:${dev ? (process.env.VITE_PORT ?? 5173) : appPort}`;
   const webhookSecret = process.env.STRIPE_WEBHOOK_SECRET ?? 'whsec_drabyard_local';
   let mail: MailFake | null = null;
-  const env: NodeJS.ProcessEnv = { ...process.env, DATABASE_URL: databaseUrl, PORT: String(appPort), APP_ORIGIN: origin };
+  const env: NodeJS.ProcessEnv = { ...process.env, DATABASE_URL: databaseUrl, PORT: String(appPort), APP_ORIGIN: origin, SESSION_SECRET: localSessionSecret() };
   if (!process.env.SMTP_URL) {
     mail = await startMailFake({ smtpPort: Number(process.env.MAIL_FAKE_SMTP_PORT ?? 2525), httpPort: Number(process.env.MAIL_FAKE_HTTP_PORT ?? 8025) });
     env.SMTP_URL = `smtp://127.0.0.1:${mail.smtpPort}`;
