@@ -4,9 +4,13 @@ import '@fontsource-variable/inter';
 import 'sonner/dist/styles.css';
 import './index.css';
 import { StrictMode } from 'react';
+import { z } from 'zod';
 import { createRoot } from 'react-dom/client';
 import { AppProvider } from './app/provider';
 import { AppRouter } from './app/router';
+
+// zod would probe for eval support, which our CSP (no 'unsafe-eval') reports as a violation on every page.
+z.config({ jitless: true });
 
 const container = document.getElementById('root');
 if (!container) throw new Error('index.html has no #root element');

@@ -49,7 +49,9 @@ describe('search in the browser', () => {
     // Narrow by condition: rebuilt originals (seeded on the replacement number only).
     const filters = page.getByRole('complementary', { name: 'Filters' });
     const rebuilt = filters.getByRole('checkbox', { name: /Rebuilt/ });
-    await rebuilt.check();
+    // The box follows the URL, which changes a moment after the click: click, then wait for the URL.
+    await rebuilt.click();
+    await page.waitForURL(/condition=rebuilt/);
     await page.waitForURL((u) => u.searchParams.getAll('condition').join() === 'rebuilt');
     await page.getByRole('list', { name: 'Active filters' }).getByRole('button', { name: /Condition: Rebuilt/ }).waitFor();
     await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'));

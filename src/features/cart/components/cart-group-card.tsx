@@ -108,8 +108,9 @@ export function CartGroupCard({ group, ...actions }: { group: CartGroup } & Line
               {group.shipping.ok ? (group.shipping.amountCents === 0 ? 'Free' : formatCents(group.shipping.amountCents)) : '—'}
             </dd>
           </div>
-          <p className={group.shipping.ok ? 'text-xs text-ink-muted' : 'text-sm font-medium text-warn'}>{group.shipping.explanation}</p>
         </dl>
+        {/* Outside the list: a <dl> may hold only dt/dd groups. */}
+        <p className={group.shipping.ok ? 'mt-1 text-xs text-ink-muted' : 'mt-1 text-sm font-medium text-warn'}>{group.shipping.explanation}</p>
       </section>
     </Card>
   );

@@ -18,11 +18,11 @@ export function VehicleList({ vehicles }: { vehicles: GarageVehicleWithProgress[
             <div className="flex items-start gap-3">
               <Truck aria-hidden="true" className="mt-1 size-5 shrink-0 text-drab-700" />
               <div className="min-w-0 flex-1">
-                <h3 className="text-lg font-semibold text-ink">
+                <h2 className="text-lg font-semibold text-ink">
                   <Link to={paths.garageVehicle.getHref(v.id)} className="after:absolute after:inset-0 hover:text-patina-700">
                     {title}
                   </Link>
-                </h3>
+                </h2>
                 <p className="text-sm text-ink-soft">
                   {v.nickname ? `${v.model.name} · ` : ''}serial <span className="font-mono">{v.serial}</span>
                   {v.buildDate ? ` · built ${v.buildDate}` : ''}

@@ -48,7 +48,7 @@ export function ListingView({ page, buySlot }: { page: ListingPage; /** Rendered
         <div className="space-y-5">
           <div>
             <p className="mb-1 text-label text-drab-700 uppercase">{part ? (part.numbers[0]?.numbers[0]?.printed ?? 'Catalog part') : 'Unidentified part'}</p>
-            <h1 className="text-3xl font-bold text-ink">{listing.title}</h1>
+            <h1 className="text-3xl font-bold break-words text-ink">{listing.title}</h1>
           </div>
           <div className="flex flex-wrap items-center gap-3">
             <p className="text-3xl font-bold text-ink">{formatCents(listing.priceCents, listing.currency)}</p>

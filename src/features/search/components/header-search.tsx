@@ -94,7 +94,7 @@ export function HeaderSearch() {
   const optionId = (i: number) => `${id}-option-${i}`;
 
   return (
-    <Form role="search" method="get" action={paths.search.path} onSubmit={close} className="relative w-full max-w-md">
+    <Form role="search" aria-label="Parts and numbers" method="get" action={paths.search.path} onSubmit={close} className="relative w-full max-w-md">
       <label htmlFor={id} className="sr-only">
         Search parts and numbers
       </label>

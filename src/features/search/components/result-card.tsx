@@ -41,7 +41,7 @@ function Thumbnail({ hit }: { hit: SearchHit }) {
       {hit.thumbnailUrl && !failed ? (
         <img src={hit.thumbnailUrl} alt="" loading="lazy" decoding="async" onError={() => setFailed(true)} className="size-full object-cover" />
       ) : (
-        <div className="flex size-full flex-col items-center justify-center gap-1 text-drab-500" aria-hidden="true">
+        <div className="flex size-full flex-col items-center justify-center gap-1 text-drab-700" aria-hidden="true">
           {isListing ? <Camera className="size-5" /> : <BookOpen className="size-5" />}
           <span className="text-[0.625rem] tracking-wide uppercase">{isListing ? 'No photo' : 'Catalog'}</span>
         </div>
