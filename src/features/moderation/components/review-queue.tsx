@@ -17,6 +17,7 @@ import { useApproveMany } from '../api/approve-many';
 import { useDecideListing } from '../api/decide-listing';
 import { useReviewQueue } from '../api/get-review-queue';
 import type { QueueFilters, QueueListing } from '../api/moderation-types';
+import { LinkPartForm } from './link-part-form';
 
 export const flagLabels: Record<(typeof listingFlagCodes)[number], string> = {
   rubber_brake_serviceable: 'Old brake rubber offered for use',
@@ -328,6 +329,8 @@ function ReviewPanel({ listing, onDone }: { listing: QueueListing; onDone: () =>
           </div>
         ) : null}
       </div>
+
+      {listing.part === null ? <LinkPartForm listing={listing} /> : null}
 
       <div className="flex flex-wrap gap-2">
         <Button

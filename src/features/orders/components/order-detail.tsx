@@ -6,17 +6,20 @@ import { Card } from '@/components/ui/card';
 import { FormAlert, Notice } from '@/components/ui/notice';
 import { textLinkClasses } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/get-me';
+import { hasRole } from '@/lib/authorization';
 import { formatDate } from '@/lib/format';
 import { useCancelOrder } from '../api/cancel-order';
 import { formatCents } from '../utils/money';
 import { SubOrderStateBadge, OrderStateBadge } from './order-state-badge';
+import { canRefund, RefundForm } from './refund-form';
 import { SubOrderProgress } from './sub-order-progress';
 
 function destinationText(order: OrderDto): string {
   return 'pickup' in order.destination ? 'Pickup from each seller' : `Shipping to ${order.destination.country}`;
 }
 
-function SubOrderCard({ subOrder }: { subOrder: SubOrderDto }) {
+function SubOrderCard({ order, subOrder, isAdmin }: { order: OrderDto; subOrder: SubOrderDto; isAdmin: boolean }) {
   const headingId = `sub-order-${subOrder.id}`;
   return (
     <Card>
@@ -84,6 +87,7 @@ function SubOrderCard({ subOrder }: { subOrder: SubOrderDto }) {
           </tfoot>
         </table>
         <p className="text-xs text-ink-muted">{subOrder.shippingExplanation}</p>
+        {isAdmin && canRefund(order, subOrder) ? <RefundForm order={order} subOrder={subOrder} /> : null}
       </section>
     </Card>
   );
@@ -112,6 +116,8 @@ function PendingNotice({ order, awaitingPayment }: { order: OrderDto; awaitingPa
 /** The buyer's order: one payment, one part per seller, each with its own progress. */
 export function OrderDetail({ order, awaitingPayment = false }: { order: OrderDto; awaitingPayment?: boolean }) {
   const justPaid = awaitingPayment && order.state === 'paid';
+  // Admins read any order here; the refund forms are theirs alone (the server checks the role again).
+  const isAdmin = hasRole(useMe().data, 'admin');
   return (
     <div className="grid items-start gap-6 lg:grid-cols-[minmax(0,1fr)_18rem]">
       <div className="space-y-5">
@@ -130,7 +136,7 @@ export function OrderDetail({ order, awaitingPayment = false }: { order: OrderDt
           {order.subOrders.length === 1 ? 'From one seller' : `From ${order.subOrders.length} sellers`}
         </h2>
         {order.subOrders.map((s) => (
-          <SubOrderCard key={s.id} subOrder={s} />
+          <SubOrderCard key={s.id} order={order} subOrder={s} isAdmin={isAdmin} />
         ))}
       </div>
       <Card className="space-y-4">
