@@ -1,3 +1,4 @@
+// source: ASME B18.8.1 cotter pin table, via ../shared REFERENCES.md (the reference rows are checked in tests/reference/cotter-pins.test.ts).
 import { describe, expect, it } from 'vitest';
 import { cotterPin, cotterPinForHole } from './cotter-pins';
 

@@ -1,3 +1,4 @@
+// source: SAE J512 inverted 45-degree flare nut threads, via ../shared REFERENCES.md; 5/16 and 3/8 in pairings are partly confirmed (tests/reference/flare-fittings.test.ts checks the rows).
 import { describe, expect, it } from 'vitest';
 import { invertedFlareNutThread, nominalTubeOd, TUBE_OD_TOLERANCE_IN } from './flare-fittings';
 

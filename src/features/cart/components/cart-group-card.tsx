@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { paths } from '@/config/paths';
 import { textLinkClasses } from '@/components/ui/text-link';
-import { formatCents } from '../utils/money';
+import { formatCents } from '@/lib/money';
 import { QuantityStepper } from './quantity-stepper';
 
 type LineActions = {

@@ -13,7 +13,7 @@ import { useCancelCheckout, useOpenCheckouts } from '../api/open-checkouts';
 import { useRemoveCartItem } from '../api/remove-cart-item';
 import { useStartCheckout } from '../api/start-checkout';
 import { useUpdateCartItem } from '../api/update-cart-item';
-import { formatCents } from '../utils/money';
+import { formatCents } from '@/lib/money';
 import { CartGroupCard } from './cart-group-card';
 import { DestinationPicker } from './destination-picker';
 

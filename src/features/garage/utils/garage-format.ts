@@ -5,10 +5,7 @@ import type { TeardownStatus } from '@shared/schemas/garage';
  * does not import another feature's internals.
  */
 
-/** "$1,234.50" from 123450 cents (US dollars, the marketplace's one currency for now). */
-export function formatCents(cents: number): string {
-  return new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' }).format(cents / 100);
-}
+export { formatCents } from '@/lib/money';
 
 /** "42.5", "$1,234.50" -> cents, read as text so no floating point creeps in; null when not an amount. */
 export function parseDollarsToCents(text: string): number | null {

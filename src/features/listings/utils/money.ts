@@ -1,7 +1,4 @@
-/** "$1,234.50" from 123450 cents (US dollars: the marketplace's one currency for now). */
-export function formatCents(cents: number, currency = 'USD'): string {
-  return new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
-}
+export { formatCents } from '@/lib/money';
 
 /**
  * "42.5", "$1,234.50" -> cents, exactly: digits are read as text so no floating point rounding creeps in.

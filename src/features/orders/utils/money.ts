@@ -1,9 +1,4 @@
-const usd = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
-
-/** "$1,234.50" from 123450 cents. Display only: every amount is computed by the server. */
-export function formatCents(cents: number): string {
-  return usd.format(cents / 100);
-}
+export { formatCents } from '@/lib/money';
 
 /**
  * Cents from a typed dollar amount such as "12", "12.5" or "1,234.50"; null when it is not one. Parsed as

@@ -1,9 +1,4 @@
-const usd = new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' });
-
-/** "$1,234.50" from integer cents. */
-export function formatCents(cents: number): string {
-  return usd.format(cents / 100);
-}
+export { formatCents } from '@/lib/money';
 
 /** Dollars typed in a price box ("12", "12.5", "$1,200") as whole cents; null when empty or not a price. */
 export function parseDollars(text: string): number | null {

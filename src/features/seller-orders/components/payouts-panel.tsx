@@ -9,7 +9,7 @@ import { textLinkClasses } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
 import { useStartOnboarding, type PayoutsReply } from '../api/get-payouts';
-import { formatCents } from '../utils/money';
+import { formatCents } from '@/lib/money';
 import { orderRef, transferStateLabels } from '../utils/seller-states';
 
 type Props = {

@@ -6,7 +6,7 @@ import { Card } from '@/components/ui/card';
 import { FormAlert, Notice } from '@/components/ui/notice';
 import { formatDate } from '@/lib/format';
 import { useDeliverSubOrder } from '../api/ship-sub-order';
-import { formatCents } from '../utils/money';
+import { formatCents } from '@/lib/money';
 import { transferStateLabels } from '../utils/seller-states';
 import { SellerStateBadge } from './seller-state-badge';
 import { ShipForm } from './ship-form';

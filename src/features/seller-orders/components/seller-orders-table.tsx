@@ -5,7 +5,7 @@ import { Card } from '@/components/ui/card';
 import { textLinkClasses } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
 import { formatDate } from '@/lib/format';
-import { formatCents } from '../utils/money';
+import { formatCents } from '@/lib/money';
 import { orderRef } from '../utils/seller-states';
 import { SellerStateBadge } from './seller-state-badge';
 

@@ -3,7 +3,7 @@ import type { Statement } from '@shared/schemas/orders';
 import { buttonClasses } from '@/components/ui/button';
 import { formatDate } from '@/lib/format';
 import { statementCsvHref } from '../api/get-statement';
-import { formatCents } from '../utils/money';
+import { formatCents } from '@/lib/money';
 import { monthLabel } from '../utils/month';
 import { orderRef } from '../utils/seller-states';
 

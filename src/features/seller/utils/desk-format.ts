@@ -22,9 +22,7 @@ export const stateTones: Record<ListingStateCode, BadgeTone> = {
   withdrawn: 'neutral',
 };
 
-export function formatCents(cents: number, currency = 'USD'): string {
-  return new Intl.NumberFormat('en-US', { style: 'currency', currency }).format(cents / 100);
-}
+export { formatCents } from '@/lib/money';
 
 /** Dollars typed by a seller -> exact cents (text arithmetic, no floating point); null when not an amount. */
 export function dollarsToCents(text: string): number | null {
