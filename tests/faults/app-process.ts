@@ -41,7 +41,17 @@ export async function freePort(): Promise<number> {
 }
 
 export async function startAppProcess(opts: { port?: number; env: Record<string, string>; readyTimeoutMs?: number }): Promise<AppProcess> {
-  const port = opts.port ?? (await freePort());
+  // A free port can be taken by another test between the probe and the app's listen: try again on a new one.
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await startOnce(opts.port ?? (await freePort()), opts);
+    } catch (err) {
+      if (opts.port !== undefined || attempt >= 3 || !/EADDRINUSE/.test(String(err))) throw err;
+    }
+  }
+}
+
+async function startOnce(port: number, opts: { env: Record<string, string>; readyTimeoutMs?: number }): Promise<AppProcess> {
   // node with tsx's loader, not the tsx CLI: the CLI runs the app in a child of its own, so a SIGKILL sent to
   // it would leave the app itself running.
   const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'server', 'index.ts')], {
@@ -49,7 +59,8 @@ export async function startAppProcess(opts: { port?: number; env: Record<string,
     env: {
       ...process.env,
       NODE_ENV: 'test',
-      LOG_LEVEL: 'warn',
+      // info: the start-up line "listening on HOST:PORT" is how readiness is told apart from a port clash.
+      LOG_LEVEL: 'info',
       HOST: '127.0.0.1',
       PORT: String(port),
       APP_ORIGIN: 'http://localhost:3000',
@@ -76,7 +87,9 @@ export async function startAppProcess(opts: { port?: number; env: Record<string,
     if (child.exitCode !== null) throw new Error(`the app exited at start (${child.exitCode}):\n${out}`);
     try {
       const r = await fetch(`${url}/api/health`, { signal: AbortSignal.timeout(2000) });
-      if (r.status === 200 || r.status === 503) break;
+      // Ready only when OUR child says it listens on this port: another process that grabbed the same free
+      // port meanwhile would answer the health check too.
+      if ((r.status === 200 || r.status === 503) && out.includes(`listening on 127.0.0.1:${port}`)) break;
     } catch {
       // not listening yet
     }
