@@ -177,13 +177,15 @@ describe('the app killed in the middle of checkouts', () => {
     // the unpaid checkouts of test files running alongside.)
     const pending = await pendingOrdersOf(buyerIds);
     await getDb().update(orders).set({ expiresAt: new Date(Date.now() - 1000) }).where(inArray(orders.id, pending.map((o) => o.id)));
-    const swept = await releaseExpiredReservations(new Date());
-    expect(swept.expired).toBeGreaterThanOrEqual(pending.length);
+    // Other test files sweep too, so which call expired these orders varies: check the orders and the stock.
+    await releaseExpiredReservations(new Date());
+    expect(pending.length).toBeGreaterThan(0);
     expect(await pendingOrdersOf(buyerIds)).toEqual([]);
     const after = await stockOf(listing.id);
     expect(after).toMatchObject({ shelf: ORIGINAL - 2, held: 0, committed: 2 });
-    expect((await releaseExpiredReservations(new Date())).expired).toBe(0);
-    expect((await stockOf(listing.id)).shelf).toBe(ORIGINAL - 2);
+    // A second sweep gives nothing back twice.
+    await releaseExpiredReservations(new Date());
+    expect(await stockOf(listing.id)).toMatchObject({ shelf: ORIGINAL - 2, held: 0, committed: 2 });
     await expectNothingTwice(listing.id);
 
     // What is left can be bought, and not one unit more.
