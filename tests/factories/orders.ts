@@ -4,6 +4,7 @@ import type { AddressInfo } from 'node:net';
 import { eq } from 'drizzle-orm';
 import type { Express } from 'express';
 import request from 'supertest';
+import Stripe from 'stripe';
 import { startStripeFake, type StripeFake } from '../../docker-free-fakes/stripe/app';
 import { createApp } from '../../server/app';
 import { getDb } from '../../server/db/client';
@@ -25,6 +26,8 @@ export type Agent = ReturnType<typeof request.agent>;
 export interface PaymentsHarness {
   app: Express;
   fake: StripeFake;
+  /** The official SDK pointed at the stand-in, for the tests' own checks of Stripe's side. */
+  stripe: Stripe;
   webhookSecret: string;
   close(): Promise<void>;
 }
@@ -53,6 +56,7 @@ export async function startPaymentsHarness(): Promise<PaymentsHarness> {
   return {
     app,
     fake,
+    stripe: new Stripe('sk_test_drabyard_harness', { host: '127.0.0.1', port: fake.port, protocol: 'http' }),
     webhookSecret,
     async close() {
       await fake.close();

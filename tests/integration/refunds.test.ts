@@ -26,7 +26,7 @@ let admin: Agent;
 
 beforeAll(async () => {
   h = await startPaymentsHarness();
-  stripe = new Stripe('sk_test_drabyard_refunds', { host: '127.0.0.1', port: h.fake.port, protocol: 'http' });
+  stripe = h.stripe;
   admin = (await signedInAs(h.app, ['buyer', 'admin'])).agent;
 });
 afterAll(async () => {

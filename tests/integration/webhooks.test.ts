@@ -24,7 +24,7 @@ let stripe: Stripe;
 
 beforeAll(async () => {
   h = await startPaymentsHarness();
-  stripe = new Stripe('sk_test_drabyard_webhooks', { host: '127.0.0.1', port: h.fake.port, protocol: 'http' });
+  stripe = h.stripe;
 });
 afterAll(async () => {
   await h.close();
