@@ -5,6 +5,7 @@
 //
 //   --reuse     keep the data set from an earlier run when it is there (skips generation)
 //   --queries N run N queries instead of 1,000 (for a quick look)
+//   --profile   also print where each category's time goes, statement by statement
 import { Agent, request as httpRequest } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
@@ -323,6 +324,50 @@ interface Timed {
   http: number;
   sql: number;
   slowest?: { sql: string; params: unknown[]; ms: number };
+  statements?: Array<{ sql: string; ms: number }>;
+}
+
+/** Which step of search() a logged statement is, from its text (for --profile). */
+const STATEMENT_KINDS: Array<[string, RegExp]> = [
+  ['probe', /^\s*SELECT count\(\*\)::int AS visited/],
+  ['scan', /WITH s AS MATERIALIZED/],
+  ['candidates', /WITH m AS MATERIALIZED/],
+  ['page in order', /^\s*SELECT doc_id, .* AS k FROM search_docs d/s],
+  ['display', /LEFT JOIN listings l ON d\.is_listing/],
+  ['hit codes', /SELECT DISTINCT unnest\(facets\)/],
+  ['labels', /CASE r\.facet WHEN 2/],
+  ['filters', /LEFT JOIN search_facet_refs r ON r\.facet = /],
+  ['corrections', /FROM search_words v/],
+  ['close numbers', /key % /],
+  ['number keys', /FROM part_numbers WHERE/],
+];
+const kindOf = (text: string) => STATEMENT_KINDS.find(([, re]) => re.test(text))?.[0] ?? 'other';
+
+function printProfile(timed: Timed[]) {
+  for (const c of ['number', 'text', 'facets', 'deep'] as const) {
+    const rows = timed.filter((t) => t.q.category === c);
+    if (!rows.length) continue;
+    const by = new Map<string, { n: number; ms: number }>();
+    let logged = 0;
+    for (const t of rows)
+      for (const st of t.statements ?? []) {
+        const k = kindOf(st.sql);
+        const e = by.get(k) ?? { n: 0, ms: 0 };
+        e.n++;
+        e.ms += st.ms;
+        by.set(k, e);
+        logged += st.ms;
+      }
+    const total = rows.reduce((a, t) => a + t.sql, 0);
+    console.log(`\n  profile ${c}: ${rows.length} searches, mean ${(total / rows.length).toFixed(1)} ms, of it in logged statements ${(logged / rows.length).toFixed(1)} ms`);
+    for (const [k, e] of [...by].sort((a, b) => b[1].ms - a[1].ms))
+      console.log(`    ${k.padEnd(14)} ${(e.n / rows.length).toFixed(2).padStart(5)} per search  ${(e.ms / rows.length).toFixed(2).padStart(6)} ms per search  ${(e.ms / e.n).toFixed(2).padStart(6)} ms each`);
+    // The searches at the category's 95th percentile and above, statement by statement.
+    for (const t of [...rows].sort((a, b) => b.sql - a.sql).slice(0, Math.max(3, Math.ceil(rows.length * 0.05))).slice(0, 8)) {
+      const steps = (t.statements ?? []).map((st) => `${kindOf(st.sql)} ${st.ms.toFixed(1)}`).join(', ');
+      console.log(`    slow: ${t.sql.toFixed(1)} ms  ${queryString(t.q.params).slice(0, 90)}\n          ${steps}`);
+    }
+  }
 }
 
 async function main() {
@@ -370,7 +415,7 @@ async function main() {
   }
 
   // Server modules read the environment when first used, so it is set before they are imported.
-  Object.assign(process.env, { DATABASE_URL: url, LOG_LEVEL: 'silent', NODE_ENV: 'test', SESSION_SECRET: 'bench-session-secret-0123456789', APP_ORIGIN: 'http://localhost:3000' });
+  Object.assign(process.env, { DATABASE_URL: url, LOG_LEVEL: 'silent', NODE_ENV: 'test', READ_CACHE: 'on', SESSION_SECRET: 'bench-session-secret-0123456789', APP_ORIGIN: 'http://localhost:3000' });
   const { createApp } = await import('../server/app');
   const { search, withStatementLog } = await import('../server/services/search');
   const { searchQuery } = await import('../shared/schemas/search');
@@ -393,8 +438,8 @@ async function main() {
     }
     m.params = cursor ? { ...params, cursor } : params;
   }
-  // Warm up (untimed): plans, caches, connections.
-  for (const m of mix.slice(0, 100)) await runService(m.params);
+  // Warm up (untimed) on the whole mix, so both timed runs meet the same caches (plans, buffers, facet labels).
+  for (const m of mix) await runService(m.params);
 
   const app = createApp();
   const server = app.listen(0, '127.0.0.1');
@@ -420,6 +465,7 @@ async function main() {
     const { statements } = await withStatementLog(() => runService(t.q.params));
     t.sql = performance.now() - start;
     t.slowest = statements.reduce<Timed['slowest']>((a, b) => (!a || b.ms > a.ms ? b : a), undefined);
+    t.statements = statements.map((x) => ({ sql: x.sql, ms: x.ms }));
   }
   agent.destroy();
   await new Promise((r) => server.close(r));
@@ -445,6 +491,7 @@ async function main() {
   ];
   console.log('');
   for (const [name, ok, v] of targets) console.log(`  ${ok ? 'PASS' : 'FAIL'}  ${name.padEnd(30)} ${v}`);
+  if (args.includes('--profile')) printProfile(timed);
   const load = (await import('node:os')).loadavg();
   console.log(`\n  load average during the run: ${load.map((x) => x.toFixed(2)).join(' ')} (2 cores expected; other work on the machine inflates every figure)`);
 

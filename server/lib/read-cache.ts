@@ -21,6 +21,24 @@ export function readCache<T extends object>(opts: { max: number; ttlMs: number }
       cache.set(key, value);
       return value;
     },
+    /** Values for many keys: hits from the cache, the rest from one call of loadMissing (keys it omits stay uncached). */
+    async getMany(keys: string[], loadMissing: (missing: string[]) => Promise<Map<string, T>>): Promise<Map<string, T>> {
+      if (!enabled()) return loadMissing(keys);
+      const out = new Map<string, T>();
+      const missing: string[] = [];
+      for (const k of keys) {
+        const hit = cache.get(k);
+        if (hit) out.set(k, hit as T);
+        else missing.push(k);
+      }
+      if (missing.length) {
+        for (const [k, v] of await loadMissing(missing)) {
+          cache.set(k, v);
+          out.set(k, v);
+        }
+      }
+      return out;
+    },
   };
 }
 

@@ -20,6 +20,7 @@ import { facetNames, type FacetName, type FacetValue, type SearchHit, type Searc
 import { conditions, type Condition } from '../domain/conditions';
 import { parsePartNumber } from '../domain/part-number';
 import { env } from '../env';
+import { readCache } from '../lib/read-cache';
 import { AppError } from '../errors';
 import { FACET_GROUP, FIXED_VALUES, facetOfGroup, fixedCode, fixedLabel, groupOf } from './search-codes';
 import { decodeCursor, encodeCursor, searchFingerprint, type CursorState, type SampleMode } from './search-cursor';
@@ -51,6 +52,8 @@ interface FilterGroup {
   codes: number[];
   priceMin?: number;
   priceMax?: number;
+  /** Parts or listings: the row's own flag, not its codes (a code on most rows is a costly index condition). */
+  isListing?: boolean;
 }
 
 interface Selected {
@@ -77,7 +80,11 @@ async function resolveFilters(q: SearchQuery): Promise<{ groups: FilterGroup[]; 
   };
   const priceSort = q.sort === 'price_asc' || q.sort === 'price_desc';
   // Catalog parts have no price: a price sort lists listings.
-  fixed('type', q.type ? [q.type] : priceSort ? ['listing'] : []);
+  const type = q.type ?? (priceSort ? 'listing' : undefined);
+  if (type) {
+    groups.push({ facet: 'type', group: FACET_GROUP.type, codes: [], isListing: type === 'listing' });
+    selected.push({ facet: 'type', value: type, label: fixedLabel('type', type) ?? type, code: fixedCode('type', type) });
+  }
   fixed('condition', q.condition);
   fixed('originality', q.originality);
   if (q.price.length || q.priceMin !== undefined || q.priceMax !== undefined) {
@@ -142,7 +149,10 @@ type Sort = 'relevance' | 'price_asc' | 'price_desc' | 'newest';
 /** A filter group's condition, bare so the planner sees (and indexes) the array operator. */
 function groupPredicate(g: FilterGroup): SQL {
   const parts: SQL[] = [];
+  if (g.isListing !== undefined) parts.push(g.isListing ? sql`d.is_listing` : sql`NOT d.is_listing`);
   if (g.codes.length) parts.push(sql`d.facets && ${sql.param(g.codes)}::int[]`);
+  // Only listings have a price; saying so lets the planner use the (listings-only) price index.
+  if (g.priceMin !== undefined || g.priceMax !== undefined) parts.push(sql`d.is_listing`);
   if (g.priceMin !== undefined) parts.push(sql`d.price >= ${g.priceMin}`);
   if (g.priceMax !== undefined) parts.push(sql`d.price <= ${g.priceMax}`);
   return sql`(${sql.join(parts, sql` AND `)})`;
@@ -174,10 +184,14 @@ function scoreExpr(m: Match): SQL {
   return sql`0::float8`;
 }
 
-function sampleCond(mode: SampleMode, m: Match): SQL {
+/** Groups an index can answer (facet codes on GIN, price on its btree); the parts-or-listings flag is not one. */
+const indexable = (groups: FilterGroup[]) => groups.filter((g) => g.codes.length || g.priceMin !== undefined || g.priceMax !== undefined);
+
+function sampleCond(mode: SampleMode, m: Match, groups: FilterGroup[]): SQL {
   if (mode === 'exact') return sql``;
-  // Browsing walks the sample's btree (its predicate carries `doc_id > 0`); searches with words use the GIN samples.
-  const browse = m.kind === 'browse' ? sql` AND d.doc_id > 0` : sql``;
+  // Browsing without filters walks the sample's btree (its predicate carries `doc_id > 0`); words or filters use
+  // the GIN samples.
+  const browse = m.kind === 'browse' && indexable(groups).length < 2 ? sql` AND d.doc_id > 0` : sql``;
   return mode === 's16' ? sql`AND d.doc_id % 16 = 0${browse}` : sql`AND d.doc_id % 128 = 0${browse}`;
 }
 
@@ -205,29 +219,46 @@ interface ScanResult {
   hits: Array<[number, number]> | null;
 }
 
-/** The scan set: rows that match and fail at most one filter group (the rest count for that group's facet). */
-function scanSet(m: Match, groups: FilterGroup[], mode: SampleMode, withScore: boolean): SQL {
+/**
+ * The rows a scan visits: those that match and may fail at most one filter group (an indexable pre-filter),
+ * with how many groups each fails and which.
+ */
+function visitSet(m: Match, groups: FilterGroup[], mode: SampleMode): SQL {
   const preds = groups.map(passes);
   const nfail = preds.length ? sql.join(preds.map((p) => sql`(NOT ${p})::int`), sql` + `) : sql`0`;
   const fail = preds.length ? sql`CASE ${sql.join(preds.map((p, i) => sql`WHEN NOT ${p} THEN ${groups[i].group}`), sql` `)} ELSE 0 END` : sql`0`;
-  // Indexable pre-filter: with two or more groups, a row failing both of the first two is out anyway.
-  const pre = groups.length >= 2 ? sql`AND (${groupPredicate(groups[0])} OR ${groupPredicate(groups[1])})` : sql``;
-  const score = withScore ? sql`CASE WHEN d.fail = 0 THEN ${scoreExpr(m)} END` : sql`NULL::float8`;
+  // Indexable pre-filter: with two or more indexable groups, a row that fails at most one either passes the
+  // first (most selective) of them or passes all the others.
+  const ix = indexable(groups);
+  const pre = ix.length >= 2 ? sql`AND (${groupPredicate(ix[0])} OR (${sql.join(ix.slice(1).map(groupPredicate), sql` AND `)}))` : sql``;
   return sql`
-    SELECT d.doc_id, d.facets, d.price, d.created, d.fail, ${score} AS score
-    FROM (
       SELECT d.doc_id, d.facets, d.price, d.created, d.part_id, d.is_listing, d.title, d.tsv,
         ${nfail} AS nfail, ${fail} AS fail
       FROM search_docs d
-      WHERE ${matchPredicate(m)} ${sampleCond(mode, m)} ${pre}
-    ) d
+      WHERE ${matchPredicate(m)} ${sampleCond(mode, m, groups)} ${pre}`;
+}
+
+/** The scan set: rows that match and fail at most one filter group (the rest count for that group's facet). */
+function scanSet(m: Match, groups: FilterGroup[], mode: SampleMode, withScore: boolean): SQL {
+  const score = withScore ? sql`CASE WHEN d.fail = 0 THEN ${scoreExpr(m)} END` : sql`NULL::float8`;
+  return sql`
+    SELECT d.doc_id, d.facets, d.price, d.created, d.fail, ${score} AS score
+    FROM (${visitSet(m, groups, mode)}) d
     WHERE d.nfail <= 1`;
 }
 
-async function probe(m: Match, groups: FilterGroup[]): Promise<number> {
-  const rows = await run<{ n: number }>(sql`
-    SELECT count(*)::int AS n FROM (${scanSet(m, groups, 's128', false)} LIMIT ${PROBE_CAP}) x`);
-  return rows[0].n;
+interface Probe {
+  /** Rows of the 1-in-128 sample the scan would visit (at most PROBE_CAP). */
+  visited: number;
+  /** Of those, rows passing every filter. */
+  passing: number;
+}
+
+async function probe(m: Match, groups: FilterGroup[]): Promise<Probe> {
+  const rows = await run<{ visited: number; passing: number }>(sql`
+    SELECT count(*)::int AS visited, count(*) FILTER (WHERE nfail = 0)::int AS passing
+    FROM (${visitSet(m, groups, 's128')} LIMIT ${PROBE_CAP}) x`);
+  return rows[0];
 }
 
 async function scan(m: Match, groups: FilterGroup[], selectedCodes: number[], mode: SampleMode, sort: Sort, cursor: CursorState | null, limit: number, hitsFromScan: boolean): Promise<ScanResult> {
@@ -359,28 +390,34 @@ interface LabelRow {
   label: string;
 }
 
+/** Labels change only when an admin renames a vehicle, system or assembly (which clears this) or a shop is renamed. */
+const labelCache = readCache<LabelRow>({ max: 100_000, ttlMs: 60_000 });
+
 /** Values and labels of facet codes that are rows elsewhere (vehicles, systems, assemblies, sellers, countries). */
 async function labels(codes: number[]): Promise<Map<number, LabelRow>> {
   const wanted = [...new Set(codes.filter((c) => [2, 3, 4, 7, 9].includes(groupOf(c))))];
   if (!wanted.length) return new Map();
-  const rows = await run<LabelRow & Record<string, unknown>>(sql`
-    SELECT r.code,
-      CASE r.facet WHEN 2 THEN v.slug WHEN 3 THEN s.slug WHEN 4 THEN a.slug ELSE r.ref END AS value,
-      CASE r.facet WHEN 2 THEN v.name WHEN 3 THEN s.name WHEN 4 THEN a.name || ' (' || av.model || ')'
-        WHEN 7 THEN coalesce(sp.shop_name, u.display_name) ELSE r.ref END AS label
-    FROM search_facet_refs r
-    LEFT JOIN vehicle_models v ON v.id = CASE WHEN r.facet = 2 THEN r.ref::uuid END
-    LEFT JOIN systems s ON s.id = CASE WHEN r.facet = 3 THEN r.ref::uuid END
-    LEFT JOIN assemblies a ON a.id = CASE WHEN r.facet = 4 THEN r.ref::uuid END
-    LEFT JOIN vehicle_models av ON av.id = a.vehicle_id
-    LEFT JOIN users u ON u.id = CASE WHEN r.facet = 7 THEN r.ref::uuid END
-    LEFT JOIN seller_profiles sp ON sp.user_id = u.id
-    WHERE r.code = ANY(${sql.param(wanted)}::int[])`);
-  return new Map(
-    rows
-      .filter((r) => r.value !== null)
-      .map((r) => [r.code, { ...r, label: groupOf(r.code) === 9 ? (fixedLabel('shipsTo', r.value) ?? r.value) : r.label }]),
-  );
+  const found = await labelCache.getMany(wanted.map(String), async (missing) => {
+    const rows = await run<LabelRow & Record<string, unknown>>(sql`
+      SELECT r.code,
+        CASE r.facet WHEN 2 THEN v.slug WHEN 3 THEN s.slug WHEN 4 THEN a.slug ELSE r.ref END AS value,
+        CASE r.facet WHEN 2 THEN v.name WHEN 3 THEN s.name WHEN 4 THEN a.name || ' (' || av.model || ')'
+          WHEN 7 THEN coalesce(sp.shop_name, u.display_name) ELSE r.ref END AS label
+      FROM search_facet_refs r
+      LEFT JOIN vehicle_models v ON v.id = CASE WHEN r.facet = 2 THEN r.ref::uuid END
+      LEFT JOIN systems s ON s.id = CASE WHEN r.facet = 3 THEN r.ref::uuid END
+      LEFT JOIN assemblies a ON a.id = CASE WHEN r.facet = 4 THEN r.ref::uuid END
+      LEFT JOIN vehicle_models av ON av.id = a.vehicle_id
+      LEFT JOIN users u ON u.id = CASE WHEN r.facet = 7 THEN r.ref::uuid END
+      LEFT JOIN seller_profiles sp ON sp.user_id = u.id
+      WHERE r.code = ANY(${sql.param(missing.map(Number))}::int[])`);
+    return new Map(
+      rows
+        .filter((r) => r.value !== null)
+        .map((r) => [String(r.code), { ...r, label: groupOf(r.code) === 9 ? (fixedLabel('shipsTo', r.value) ?? r.value) : r.label }]),
+    );
+  });
+  return new Map([...found].map(([k, v]) => [Number(k), v]));
 }
 
 /** Rounds an estimate to two significant figures, so it does not look more exact than it is. */
@@ -490,15 +527,22 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   const limit = q.limit;
   const runAll = async (m: Match): Promise<{ res: ScanResult; mode: SampleMode; page: Array<[number, number]>; exactTotal: number | null }> => {
     let mode: SampleMode = 'exact';
+    let many = false;
     if (cursor) mode = cursor.mode;
     else if (m.kind !== 'number') {
-      const n = await probe(m, groups);
+      const { visited: n, passing } = await probe(m, groups);
       mode = n * 128 <= EXACT_MAX ? 'exact' : n * 8 <= S16_MAX_ROWS && n < PROBE_CAP ? 's16' : 's128';
+      // Clearly more rows pass than the candidate set holds: no exact total to be had from it.
+      many = passing * 128 >= 4 * CANDIDATES;
     }
     const codes = selected.map((x) => x.code);
     if (mode === 'exact') {
       const res = await scan(m, groups, codes, mode, sort, cursor, limit, true);
       return { res, mode, page: res.hits ?? [], exactTotal: res.total };
+    }
+    if (many && sort !== 'relevance') {
+      const [res, page] = await Promise.all([scan(m, groups, codes, mode, sort, cursor, limit, false), pageInOrder(m, groups, sort, cursor, limit)]);
+      return { res, mode, page, exactTotal: null };
     }
     const [res, cand] = await Promise.all([scan(m, groups, codes, mode, sort, cursor, limit, false), candidates(m, groups, sort, cursor, limit)]);
     if (cand.n <= CANDIDATES) return { res, mode, page: cand.hits, exactTotal: cand.n };
@@ -518,15 +562,10 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   const pageRows = page.slice(0, limit);
   const ids = pageRows.map(([id]) => id);
   const rate = RATE[mode];
-  const [rowsById, lab] = await Promise.all([
-    display(ids),
-    (async () => {
-      const hitCodes = ids.length
-        ? (await run<{ c: number }>(sql`SELECT DISTINCT unnest(facets) AS c FROM search_docs WHERE doc_id = ANY(${sql.param(ids)}::int[])`)).map((r) => r.c)
-        : [];
-      return labels([...res.counts.map(([c]) => c), ...hitCodes]);
-    })(),
-  ]);
+  const [rowsById, lab] = await Promise.all([display(ids), labels(res.counts.map(([c]) => c))]);
+  // The page's own codes (for its vehicle names) come with its display rows; most are labelled already.
+  const pageCodes = [...rowsById.values()].flatMap((r) => r.facets).filter((c) => !lab.has(c));
+  for (const [c, l] of await labels(pageCodes)) lab.set(c, l);
   const hits = pageRows.flatMap(([id, score]) => {
     const r = rowsById.get(id);
     return r ? [toHit(r, sort === 'relevance' ? score : 0, lab, numberInfo)] : [];
