@@ -340,6 +340,7 @@ const STATEMENT_KINDS: Array<[string, RegExp]> = [
   ['corrections', /FROM search_words v/],
   ['close numbers', /key % /],
   ['number keys', /FROM part_numbers WHERE/],
+  ['number graph', /reach\(part_id, depth\)/],
 ];
 const kindOf = (text: string) => STATEMENT_KINDS.find(([, re]) => re.test(text))?.[0] ?? 'other';
 

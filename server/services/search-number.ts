@@ -8,8 +8,8 @@ import { sql } from 'drizzle-orm';
 import { interchangeLabels } from '../../shared/schemas/catalog';
 import { parsePartNumber } from '../domain/part-number';
 import { fillersForPart, indexEdges, resolve, type FillerSet, type Interchange, type PartNumberRow, type SupersessionIndex } from '../domain/supersession';
-import { loadSubgraph } from './catalog-graph';
-import { run } from './search-run';
+import { subgraphFromRow, subgraphStatement, type Subgraph, type SubgraphRow } from './catalog-graph';
+import { run } from '../db/run';
 import { nearFoldedKeys } from './search-text';
 
 export type NumberMatch = 'exact' | 'alternate' | 'prefix' | 'near';
@@ -39,28 +39,49 @@ interface NumberRow {
   folded: string;
 }
 
-async function numberRows(where: ReturnType<typeof sql>, limit: number): Promise<NumberRow[]> {
-  // Sorted after the lookup: an ORDER BY in the statement could tempt the planner to walk the key index.
-  const rows = await run<NumberRow & Record<string, unknown>>(sql`SELECT part_id, printed, key, folded FROM (
-    SELECT part_id, printed, key, folded FROM part_numbers WHERE ${where} OFFSET 0) n LIMIT ${limit}`);
-  return rows.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : a.printed.localeCompare(b.printed)));
+interface SeedRow extends NumberRow {
+  via: 'exact' | 'prefix' | 'near';
 }
 
-/** Finds the parts a typed number names, on btree indexes only; null when the text is not a number at all. */
-async function findSeeds(key: string, folded: string): Promise<{ via: NumberMatch; rows: NumberRow[] } | null> {
-  const exact = await numberRows(sql`key = ${key} OR folded = ${folded}`, 200);
-  if (exact.length) return { via: exact.some((r) => r.key === key) ? 'exact' : 'alternate', rows: exact };
-  if (key.length >= 3) {
-    // Keys are letters and digits only, so the pattern needs no escaping; text_pattern_ops serves it.
-    const prefix = await numberRows(sql`key LIKE ${key + '%'}`, SEED_LIMIT);
-    if (prefix.length) return { via: 'prefix', rows: prefix };
+const byKey = (a: NumberRow, b: NumberRow) => (a.key < b.key ? -1 : a.key > b.key ? 1 : a.printed.localeCompare(b.printed));
+
+/**
+ * Finds the parts a typed number names and loads their supersession component: the exact or folded key, else
+ * a key prefix (one round trip: the prefix level runs only when the exact one found nothing), else the folded
+ * keys one typo away (a second round trip, needed by few searches). Btree indexes only.
+ */
+async function findSeeds(key: string, folded: string): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
+  // Keys are letters and digits only, so the LIKE pattern needs no escaping; text_pattern_ops serves it.
+  const levels = sql`
+    exact AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers WHERE key = ${key} OR folded = ${folded} LIMIT 200),
+    prefix AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers
+      WHERE ${key.length >= 3 ? sql`NOT EXISTS (SELECT 1 FROM exact)` : sql`false`} AND key LIKE ${key + '%'} LIMIT ${SEED_LIMIT}),
+    seeds AS MATERIALIZED (SELECT 'exact' AS via, * FROM exact UNION ALL SELECT 'prefix', * FROM prefix),`;
+  let found = await seedsWithGraph(levels, 'number_seeds');
+  if (!found) {
+    const near = nearFoldedKeys(folded);
+    if (!near.length) return null;
+    found = await seedsWithGraph(
+      sql`seeds AS MATERIALIZED (SELECT 'near' AS via, n.part_id, n.printed, n.key, n.folded
+        FROM unnest(${sql.param(near)}::text[]) k JOIN part_numbers n ON n.folded = k LIMIT ${SEED_LIMIT}),`,
+      'number_near_seeds',
+    );
+    if (!found) return null;
   }
-  const near = nearFoldedKeys(folded);
-  if (near.length) {
-    const rows = await numberRows(sql`folded = ANY(${sql.param(near)}::text[])`, SEED_LIMIT);
-    if (rows.length) return { via: 'near', rows };
-  }
-  return null;
+  const { seeds, graph } = found;
+  const level = seeds[0].via;
+  const via: NumberMatch = level === 'exact' ? (seeds.some((r) => r.key === key) ? 'exact' : 'alternate') : level;
+  return { via, rows: seeds, graph };
+}
+
+/** Runs seed-finding CTEs (ending in `seeds`) with the component of what they find; null when they find nothing. */
+async function seedsWithGraph(levels: ReturnType<typeof sql>, name: string): Promise<{ seeds: SeedRow[]; graph: Subgraph } | null> {
+  const rows = await run<SubgraphRow & { seeds: SeedRow[] | null } & Record<string, unknown>>(
+    subgraphStatement(sql`SELECT part_id FROM seeds`, levels, sql`, (SELECT json_agg(seeds) FROM seeds) AS seeds`),
+    { prepare: name },
+  );
+  const seeds = (rows[0].seeds ?? []).sort(byKey);
+  return seeds.length ? { seeds, graph: subgraphFromRow(rows[0]) } : null;
 }
 
 function primaryNumbers(numbers: PartNumberRow[]): Map<string, string> {
@@ -95,7 +116,7 @@ export async function resolveNumberHits(typed: string): Promise<NumberResolution
   if (!seeds) return { ...lower, via: null, parts: [] };
 
   const seedIds = [...new Set(seeds.rows.map((r) => r.part_id))];
-  const graph = await loadSubgraph(seedIds);
+  const graph = seeds.graph;
   const index = indexEdges(graph.edges);
   const primary = primaryNumbers(graph.numbers);
 
@@ -153,7 +174,7 @@ export async function closeNumbers(key: string, limit = 5): Promise<Array<{ numb
   if (key.length < 3) return [];
   const k = key.toUpperCase();
   const found = await run<{ printed: string; part_id: string }>(sql`
-    SELECT printed, part_id FROM part_numbers WHERE key % ${k} ORDER BY similarity(key, ${k}) DESC, printed LIMIT ${limit * 3}`);
+    SELECT printed, part_id FROM part_numbers WHERE key % ${k} ORDER BY similarity(key, ${k}) DESC, printed LIMIT ${limit * 3}`, { prepare: 'close_numbers' });
   const seen = new Set<string>();
   const rows = found.filter((x) => !seen.has(x.part_id) && (seen.add(x.part_id), true)).slice(0, limit);
   return rows.map((x) => ({ number: x.printed, partId: x.part_id }));

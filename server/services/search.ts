@@ -25,8 +25,8 @@ import { AppError } from '../errors';
 import { FACET_GROUP, FIXED_VALUES, facetOfGroup, fixedCode, fixedLabel, groupOf } from './search-codes';
 import { decodeCursor, encodeCursor, searchFingerprint, type CursorState, type SampleMode } from './search-cursor';
 import { closeNumbers, resolveNumberHits, type NumberHitPart } from './search-number';
-import { run } from './search-run';
-export { withStatementLog, type LoggedStatement } from './search-run';
+import { run } from '../db/run';
+export { withStatementLog, type LoggedStatement } from '../db/run';
 import { correctableWords, isNumberQuery, parseTextQuery, type QueryChunk } from './search-text';
 
 /** Above this many rows to scan (estimated), counts come from a sample. Measured with `npm run bench:search`. */
@@ -114,7 +114,7 @@ async function resolveFilters(q: SearchQuery): Promise<{ groups: FilterGroup[]; 
     lookups.push(sql`SELECT 'shipsTo' AS facet, c AS value, c AS label, r.code FROM unnest(${sql.param(q.shipsTo)}::text[]) c
       LEFT JOIN search_facet_refs r ON r.facet = 9 AND r.ref = c`);
   if (lookups.length) {
-    const rows = await run<{ facet: FacetName; value: string; label: string; code: number | null }>(sql.join(lookups, sql` UNION ALL `));
+    const rows = await run<{ facet: FacetName; value: string; label: string; code: number | null }>(sql.join(lookups, sql` UNION ALL `), { prepare: 'facet_filters' });
     for (const facet of ['vehicle', 'system', 'assembly', 'seller', 'shipsTo'] as const) {
       const wanted = q[facet];
       if (!wanted.length) continue;
@@ -279,7 +279,11 @@ async function scan(m: Match, groups: FilterGroup[], selectedCodes: number[], mo
           SELECT c, count(*)::int AS n FROM (SELECT unnest(facets) AS c, fail FROM s) u
           WHERE u.fail = 0 OR (u.c >> 24) = u.fail GROUP BY c) g
         ) cc WHERE rank <= ${FACET_ROWS} OR c = ANY(${sql.param(selectedCodes)}::int[])) AS counts,
-      ${hits} AS hits`);
+      ${hits} AS hits`,
+    // A number's rows are found by part id and key (one plan suits them all); a word's plan depends on how
+    // common the word is, so text scans are planned each time.
+    m.kind === 'number' ? { prepare: 'number_scan' } : {},
+  );
   return rows[0];
 }
 
@@ -328,7 +332,7 @@ async function corrections(words: string[]): Promise<Map<string, string>> {
   const rows = await run<{ w: string; fix: string | null }>(sql`
     SELECT t.w, (SELECT v.word FROM search_words v WHERE v.word % t.w ORDER BY similarity(v.word, t.w) DESC, v.word LIMIT 1) AS fix
     FROM unnest(${sql.param(words)}::text[]) AS t(w)
-    WHERE NOT EXISTS (SELECT 1 FROM search_words v WHERE v.word = t.w)`);
+    WHERE NOT EXISTS (SELECT 1 FROM search_words v WHERE v.word = t.w)`, { prepare: 'word_corrections' });
   return new Map(rows.filter((r) => r.fix && r.fix !== r.w).map((r) => [r.w, r.fix!]));
 }
 
@@ -380,7 +384,7 @@ async function display(docIds: number[]): Promise<Map<number, DisplayRow>> {
     LEFT JOIN listings l ON d.is_listing AND l.id = d.ref_id
     LEFT JOIN seller_profiles sp ON sp.user_id = l.seller_id
     LEFT JOIN users u ON u.id = l.seller_id
-    WHERE d.doc_id = ANY(${sql.param(docIds)}::int[])`);
+    WHERE d.doc_id = ANY(${sql.param(docIds)}::int[])`, { prepare: 'search_display' });
   return new Map(rows.map((r) => [r.doc_id, r]));
 }
 
@@ -391,7 +395,7 @@ interface LabelRow {
 }
 
 /** Labels change only when an admin renames a vehicle, system or assembly (which clears this) or a shop is renamed. */
-const labelCache = readCache<LabelRow>({ max: 100_000, ttlMs: 60_000 });
+const labelCache = readCache<LabelRow>({ max: 100_000, ttlMs: 10 * 60_000 });
 
 /** Values and labels of facet codes that are rows elsewhere (vehicles, systems, assemblies, sellers, countries). */
 async function labels(codes: number[]): Promise<Map<number, LabelRow>> {
@@ -410,7 +414,7 @@ async function labels(codes: number[]): Promise<Map<number, LabelRow>> {
       LEFT JOIN vehicle_models av ON av.id = a.vehicle_id
       LEFT JOIN users u ON u.id = CASE WHEN r.facet = 7 THEN r.ref::uuid END
       LEFT JOIN seller_profiles sp ON sp.user_id = u.id
-      WHERE r.code = ANY(${sql.param(missing.map(Number))}::int[])`);
+      WHERE r.code = ANY(${sql.param(missing.map(Number))}::int[])`, { prepare: 'facet_labels' });
     return new Map(
       rows
         .filter((r) => r.value !== null)

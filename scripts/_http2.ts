@@ -1,0 +1,16 @@
+import { Agent, request } from 'node:http';
+import type { AddressInfo } from 'node:net';
+Object.assign(process.env, { DATABASE_URL: 'postgres://postgres@127.0.0.1:54349/drabyard_bench', LOG_LEVEL: 'silent', NODE_ENV: 'test', READ_CACHE: 'on', SESSION_SECRET: 'bench-session-secret-0123456789', APP_ORIGIN: 'http://localhost:3000' });
+const { createApp } = await import('../server/app');
+const app = createApp();
+const server = app.listen(0, '127.0.0.1');
+await new Promise((r) => server.once('listening', r));
+const port = (server.address() as AddressInfo).port;
+const agent = new Agent({ keepAlive: true, maxSockets: 1 });
+const get = (p: string) => new Promise<number>((res, rej) => { const rq = request({ host: '127.0.0.1', port, path: p, agent }, (r) => { let n = 0; r.on('data', (c) => (n += c.length)); r.on('end', () => res(n)); }); rq.on('error', rej); rq.end(); });
+const q = process.argv[2] ?? 'KV-020760-D';
+const target = process.argv[3] ?? '/api/search?q=' + encodeURIComponent(q);
+for (let i = 0; i < 300; i++) await get(target);
+console.log('START', Date.now());
+for (let i = 0; i < 5000; i++) await get(target);
+agent.destroy(); server.close(); process.exit(0);
