@@ -6,7 +6,7 @@ import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import { configurePassport } from './auth/passport';
 import { requireSameOrigin } from './auth/same-origin';
-import { sessionMiddleware } from './auth/session';
+import { SESSION_COOKIE, sessionMiddleware } from './auth/session';
 import { env, type Env } from './env';
 import { AppError, errorHandler } from './errors';
 import { logger } from './lib/logger';
@@ -40,18 +40,24 @@ export function createApp(e: Env = env()): Express {
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(
-    pinoHttp({
-      logger,
-      genReqId: (req, res) => {
-        const incoming = req.headers['x-request-id'];
-        const id = typeof incoming === 'string' && /^[\w-]{8,64}$/.test(incoming) ? incoming : randomUUID();
-        res.setHeader('X-Request-Id', id);
-        return id;
-      },
-      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-    }),
-  );
+  // Every response names its request, so a report can be matched to the log.
+  app.use((req, res, next) => {
+    const incoming = req.headers['x-request-id'];
+    const id = typeof incoming === 'string' && /^[\w-]{8,64}$/.test(incoming) ? incoming : randomUUID();
+    (req as typeof req & { id: string }).id = id;
+    res.setHeader('X-Request-Id', id);
+    next();
+  });
+  // With logging off (tests, benchmarks), the per-request logger would only cost time.
+  if (logger.level !== 'silent') {
+    app.use(
+      pinoHttp({
+        logger,
+        genReqId: (req) => (req as typeof req & { id: string }).id,
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      }),
+    );
+  }
 
   const api = express.Router();
   const origins = [e.APP_ORIGIN, ...e.EXTRA_ORIGINS.split(',').map((s) => s.trim()).filter(Boolean)];
@@ -60,10 +66,17 @@ export function createApp(e: Env = env()): Express {
   api.use('/webhooks/stripe', express.raw({ type: '*/*', limit: '1mb' }));
   api.use(express.json({ limit: '1mb' }));
   api.use(express.urlencoded({ extended: false, limit: '100kb' }));
-  api.use(sessionMiddleware(e));
+  const sessions = sessionMiddleware(e);
   const passport = configurePassport();
+  const passportSession = passport.session();
   api.use(passport.initialize());
-  api.use(passport.session());
+  // A reading request without our session cookie is anonymous: it needs no session (nothing to load, and an
+  // unsaved one would only be generated and dropped). Everything else, sign-in included, gets one.
+  const cookieMark = `${SESSION_COOKIE}=`;
+  api.use((req, res, next) => {
+    if ((req.method === 'GET' || req.method === 'HEAD') && !req.headers.cookie?.includes(cookieMark)) return next();
+    sessions(req, res, (err?: unknown) => (err ? next(err) : passportSession(req, res, next)));
+  });
   api.use(apiRouter);
   api.use((req, _res, next) => next(new AppError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}`)));
   app.use('/api', api);

@@ -13,7 +13,7 @@
  *    counts are estimates. The page then comes from the full index: the rows passing every filter, at most
  *    CANDIDATES of them (exact total and page when they are that few; relevance ranked within them when more;
  *    price and newest sorts walk their btree).
- * 4. The page's display fields and the facet labels are fetched for those few rows only.
+ * 4. The statement that picks the page also returns its rows' display fields; facet labels come from a cache.
  */
 import { sql, type SQL } from 'drizzle-orm';
 import { facetNames, type FacetName, type FacetValue, type SearchHit, type SearchQuery, type SearchReply, type SuggestReply } from '../../shared/schemas/search';
@@ -216,8 +216,11 @@ interface ScanResult {
   total: number;
   scanned: number;
   counts: Array<[number, number]>;
-  hits: Array<[number, number]> | null;
+  hits: PageRow[] | null;
 }
+
+/** A page entry: search row id, sort key, and the row's display fields. */
+type PageRow = [number, number, DisplayRow];
 
 /**
  * The rows a scan visits: those that match and may fail at most one filter group (an indexable pre-filter),
@@ -264,12 +267,12 @@ async function probe(m: Match, groups: FilterGroup[]): Promise<Probe> {
 async function scan(m: Match, groups: FilterGroup[], selectedCodes: number[], mode: SampleMode, sort: Sort, cursor: CursorState | null, limit: number, hitsFromScan: boolean): Promise<ScanResult> {
   const s = sortParts(sort);
   const hits = hitsFromScan
-    ? sql`(SELECT coalesce(json_agg(json_build_array(doc_id, k) ORDER BY ord), '[]'::json) FROM (
+    ? sql`(SELECT coalesce(json_agg(json_build_array(h.doc_id, h.k, ${displayJson(sql`h.doc_id`)}) ORDER BY h.ord), '[]'::json) FROM (
           SELECT doc_id, ${s.key} AS k, row_number() OVER (ORDER BY ${s.order}) AS ord
           FROM s WHERE fail = 0 ${cursor ? sql`AND ${s.after(cursor)}` : sql``}
           ORDER BY ${s.order} LIMIT ${limit + 1}) h)`
     : sql`NULL::json`;
-  const rows = await run<{ total: number; scanned: number; counts: Array<[number, number]>; hits: Array<[number, number]> | null }>(sql`
+  const rows = await run<{ total: number; scanned: number; counts: Array<[number, number]>; hits: PageRow[] | null }>(sql`
     WITH s AS MATERIALIZED (${scanSet(m, groups, mode, hitsFromScan && sort === 'relevance')})
     SELECT
       (SELECT count(*) FROM s WHERE fail = 0)::int AS total,
@@ -288,15 +291,17 @@ async function scan(m: Match, groups: FilterGroup[], selectedCodes: number[], mo
 }
 
 /** Exact page for price and newest sorts when counting ran on a sample: an index walk in sort order. */
-async function pageInOrder(m: Match, groups: FilterGroup[], sort: Exclude<Sort, 'relevance'>, cursor: CursorState | null, limit: number): Promise<Array<[number, number]>> {
+async function pageInOrder(m: Match, groups: FilterGroup[], sort: Exclude<Sort, 'relevance'>, cursor: CursorState | null, limit: number): Promise<PageRow[]> {
   const s = sortParts(sort);
   const all = groups.map((g) => sql`AND ${groupPredicate(g)}`);
-  const rows = await run<{ doc_id: number; k: number }>(sql`
-    SELECT doc_id, ${s.key} AS k FROM search_docs d
-    WHERE ${matchPredicate(m)} ${sort === 'newest' ? sql`` : sql`AND d.is_listing`} ${sql.join(all, sql` `)}
-      ${cursor ? sql`AND ${s.after(cursor)}` : sql``}
-    ORDER BY ${s.order} LIMIT ${limit + 1}`);
-  return rows.map((r) => [r.doc_id, r.k]);
+  const rows = await run<{ doc_id: number; k: number; disp: DisplayRow }>(sql`
+    SELECT p.doc_id, p.k, ${displayJson(sql`p.doc_id`)} AS disp FROM (
+      SELECT doc_id, ${s.key} AS k, row_number() OVER (ORDER BY ${s.order}) AS ord FROM search_docs d
+      WHERE ${matchPredicate(m)} ${sort === 'newest' ? sql`` : sql`AND d.is_listing`} ${sql.join(all, sql` `)}
+        ${cursor ? sql`AND ${s.after(cursor)}` : sql``}
+      ORDER BY ${s.order} LIMIT ${limit + 1}) p
+    ORDER BY p.ord`);
+  return rows.map((r) => [r.doc_id, r.k, r.disp]);
 }
 
 /**
@@ -304,10 +309,10 @@ async function pageInOrder(m: Match, groups: FilterGroup[], sort: Exclude<Sort, 
  * most CANDIDATES of them. When they are that few, total and page are exact; otherwise relevance ranks within
  * them (price and newest sorts then walk their index instead).
  */
-async function candidates(m: Match, groups: FilterGroup[], sort: Sort, cursor: CursorState | null, limit: number): Promise<{ n: number; hits: Array<[number, number]> }> {
+async function candidates(m: Match, groups: FilterGroup[], sort: Sort, cursor: CursorState | null, limit: number): Promise<{ n: number; hits: PageRow[] }> {
   const s = sortParts(sort);
   const all = groups.map((g) => sql`AND ${groupPredicate(g)}`);
-  const rows = await run<{ n: number; hits: Array<[number, number]> }>(sql`
+  const rows = await run<{ n: number; hits: PageRow[] }>(sql`
     WITH m AS MATERIALIZED (
       SELECT d.doc_id, d.price, d.created, ${sort === 'relevance' ? scoreExpr(m) : sql`NULL::float8`} AS score
       FROM search_docs d WHERE ${matchPredicate(m)} ${sql.join(all, sql` `)}
@@ -316,7 +321,7 @@ async function candidates(m: Match, groups: FilterGroup[], sort: Sort, cursor: C
     -- may wade through rows of the wrong kind); only the first rows are then pulled from it.
     c AS MATERIALIZED (SELECT * FROM m LIMIT ${CANDIDATES + 1})
     SELECT (SELECT count(*) FROM c)::int AS n,
-      (SELECT coalesce(json_agg(json_build_array(doc_id, k) ORDER BY ord), '[]'::json) FROM (
+      (SELECT coalesce(json_agg(json_build_array(h.doc_id, h.k, ${displayJson(sql`h.doc_id`)}) ORDER BY h.ord), '[]'::json) FROM (
         SELECT doc_id, ${s.key} AS k, row_number() OVER (ORDER BY ${s.order}) AS ord
         FROM c ${cursor ? sql`WHERE ${s.after(cursor)}` : sql``} ORDER BY ${s.order} LIMIT ${limit + 1}) h) AS hits`);
   return rows[0];
@@ -374,18 +379,20 @@ interface DisplayRow {
   thumb_key: string | null;
 }
 
-async function display(docIds: number[]): Promise<Map<number, DisplayRow>> {
-  if (!docIds.length) return new Map();
-  const rows = await run<DisplayRow & Record<string, unknown>>(sql`
-    SELECT d.doc_id, d.ref_id, d.is_listing, d.part_id, d.title, d.number, d.price, d.created, d.facets,
-      l.condition, l.quantity, l.seller_id, coalesce(sp.shop_name, u.display_name) AS seller_name,
-      (SELECT ph.thumb_key FROM listing_photos ph WHERE ph.listing_id = l.id ORDER BY ph.position LIMIT 1) AS thumb_key
-    FROM search_docs d
-    LEFT JOIN listings l ON d.is_listing AND l.id = d.ref_id
-    LEFT JOIN seller_profiles sp ON sp.user_id = l.seller_id
-    LEFT JOIN users u ON u.id = l.seller_id
-    WHERE d.doc_id = ANY(${sql.param(docIds)}::int[])`, { prepare: 'search_display' });
-  return new Map(rows.map((r) => [r.doc_id, r]));
+/**
+ * The display fields of one search row as JSON, for the statement that picks the page (so the page needs no
+ * second round trip). `docId` is a column of the enclosing query.
+ */
+function displayJson(docId: SQL): SQL {
+  return sql`(SELECT row_to_json(x) FROM (
+    SELECT dd.doc_id, dd.ref_id, dd.is_listing, dd.part_id, dd.title, dd.number, dd.price, dd.created, dd.facets,
+      dl.condition, dl.quantity, dl.seller_id, coalesce(dsp.shop_name, du.display_name) AS seller_name,
+      (SELECT ph.thumb_key FROM listing_photos ph WHERE ph.listing_id = dl.id ORDER BY ph.position LIMIT 1) AS thumb_key
+    FROM search_docs dd
+    LEFT JOIN listings dl ON dd.is_listing AND dl.id = dd.ref_id
+    LEFT JOIN seller_profiles dsp ON dsp.user_id = dl.seller_id
+    LEFT JOIN users du ON du.id = dl.seller_id
+    WHERE dd.doc_id = ${docId}) x)`;
 }
 
 interface LabelRow {
@@ -529,7 +536,7 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   }
 
   const limit = q.limit;
-  const runAll = async (m: Match): Promise<{ res: ScanResult; mode: SampleMode; page: Array<[number, number]>; exactTotal: number | null }> => {
+  const runAll = async (m: Match): Promise<{ res: ScanResult; mode: SampleMode; page: PageRow[]; exactTotal: number | null }> => {
     let mode: SampleMode = 'exact';
     let many = false;
     if (cursor) mode = cursor.mode;
@@ -564,16 +571,10 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
 
   const more = page.length > limit;
   const pageRows = page.slice(0, limit);
-  const ids = pageRows.map(([id]) => id);
   const rate = RATE[mode];
-  const [rowsById, lab] = await Promise.all([display(ids), labels(res.counts.map(([c]) => c))]);
-  // The page's own codes (for its vehicle names) come with its display rows; most are labelled already.
-  const pageCodes = [...rowsById.values()].flatMap((r) => r.facets).filter((c) => !lab.has(c));
-  for (const [c, l] of await labels(pageCodes)) lab.set(c, l);
-  const hits = pageRows.flatMap(([id, score]) => {
-    const r = rowsById.get(id);
-    return r ? [toHit(r, sort === 'relevance' ? score : 0, lab, numberInfo)] : [];
-  });
+  // The page's own codes (for its vehicle names) came with its display rows; most are labelled already.
+  const lab = await labels([...res.counts.map(([c]) => c), ...pageRows.flatMap(([, , r]) => r?.facets ?? [])]);
+  const hits = pageRows.flatMap(([, score, r]) => (r ? [toHit(r, sort === 'relevance' ? score : 0, lab, numberInfo)] : []));
   const last = pageRows[pageRows.length - 1];
   const nextCursor = more && last ? encodeCursor({ value: last[1], docId: last[0], mode, search: fingerprint }, cursorSecret()) : null;
 
