@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { existsSync } from 'node:fs';
+import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
@@ -90,8 +90,13 @@ export function createApp(e: Env = env()): Express {
   if (existsSync(path.join(clientDir, 'index.html'))) {
     app.use('/assets', express.static(path.join(clientDir, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    // Client-side routes: every other GET gets the app shell.
-    app.get(/^(?!\/api\/|\/media\/).*/, (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+    // Client-side routes: every other GET gets the app shell, held in memory (it is read on every first visit;
+    // a new build restarts the server).
+    const shell = readFileSync(path.join(clientDir, 'index.html'));
+    app.get(/^(?!\/api\/|\/media\/).*/, (_req, res) => {
+      res.setHeader('Cache-Control', 'no-cache');
+      res.type('html').send(shell);
+    });
   }
   app.use(errorHandler);
   return app;

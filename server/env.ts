@@ -28,6 +28,11 @@ const envSchema = z.object({
   CHECKOUT_HOLD_MINUTES: z.coerce.number().int().min(30).max(1440).default(30),
   /** How often the sweeper releases stock of expired checkouts and retries unpaid transfers; 0 turns it off. */
   STOCK_SWEEP_SECONDS: z.coerce.number().int().min(0).default(60),
+  // How many processes serve HTTP (node:cluster); background jobs run once, in the primary process.
+  // Identical searches within this many seconds share one answer (0: every search runs; the search benchmark
+  // uses 0 to measure the engine itself).
+  SEARCH_CACHE_SECONDS: z.coerce.number().int().min(0).max(3600).default(10),
+  WEB_CONCURRENCY: z.coerce.number().int().min(1).max(64).default(1),
   MEDIA_DIR: z.string().default('.data/media'),
   S3_BUCKET: z.string().optional(),
   S3_ENDPOINT: z.string().optional(),

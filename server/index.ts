@@ -1,3 +1,4 @@
+import cluster from 'node:cluster';
 import type { Server } from 'node:http';
 import { createApp } from './app';
 import { closeDb } from './db/client';
@@ -8,29 +9,80 @@ import { logger } from './lib/logger';
 import { closeMailer } from './lib/mailer';
 
 const e = env();
-const app = createApp(e);
-const sweeper = startStockSweeper(e.STOCK_SWEEP_SECONDS * 1000);
-const server: Server = app.listen(e.PORT, e.HOST, () => {
-  logger.info(`Drabyard is up at ${e.APP_ORIGIN} (listening on ${e.HOST}:${e.PORT})`);
-});
-startJobs().catch((err) => logger.error({ err }, 'background jobs did not start'));
+const clustered = e.WEB_CONCURRENCY > 1;
 
-let closing = false;
-async function shutdown(signal: string) {
-  if (closing) return;
-  closing = true;
-  logger.info({ signal }, 'shutting down: finishing open requests');
-  const force = setTimeout(() => process.exit(1), 10_000);
-  force.unref();
-  server.close(async () => {
+/** Background work (the job queue, the stock sweeper) runs in one process only: alone, or the cluster's primary. */
+function startBackground() {
+  const sweeper = startStockSweeper(e.STOCK_SWEEP_SECONDS * 1000);
+  startJobs().catch((err) => logger.error({ err }, 'background jobs did not start'));
+  return async () => {
     await sweeper.stop().catch(() => {});
     await stopJobs().catch(() => {});
+  };
+}
+
+function serveHttp(onListening: () => void) {
+  const server: Server = createApp(e).listen(e.PORT, e.HOST, onListening);
+  return (done: () => void) => {
+    server.close(() => done());
+    server.closeIdleConnections();
+  };
+}
+
+let closing = false;
+function onSignals(shutdown: (signal: string) => Promise<void>) {
+  const once = (signal: string) => {
+    if (closing) return;
+    closing = true;
+    const force = setTimeout(() => process.exit(1), 10_000);
+    force.unref();
+    void shutdown(signal);
+  };
+  process.on('SIGINT', () => once('SIGINT'));
+  process.on('SIGTERM', () => once('SIGTERM'));
+}
+
+if (clustered && cluster.isPrimary) {
+  // Primary: forks the HTTP workers (they share the port), restarts one that dies, runs the background work.
+  const stopBackground = startBackground();
+  let up = 0;
+  const fork = () =>
+    cluster.fork().on('listening', () => {
+      if (++up === e.WEB_CONCURRENCY) logger.info(`Drabyard is up at ${e.APP_ORIGIN} (listening on ${e.HOST}:${e.PORT}, ${e.WEB_CONCURRENCY} processes)`);
+    });
+  for (let i = 0; i < e.WEB_CONCURRENCY; i++) fork();
+  cluster.on('exit', (worker, code, signal) => {
+    if (closing) return;
+    logger.error({ pid: worker.process.pid, code, signal }, 'an HTTP process ended; starting another');
+    fork();
+  });
+  onSignals(async (signal) => {
+    logger.info({ signal }, 'shutting down: finishing open requests');
+    const workers = Object.values(cluster.workers ?? {});
+    await Promise.all(workers.map((w) => new Promise<void>((resolve) => (w ? (w.once('exit', () => resolve()), w.kill('SIGTERM')) : resolve()))));
+    await stopBackground();
     await closeDb().catch(() => {});
     closeMailer();
     logger.info('stopped');
     process.exit(0);
   });
-  server.closeIdleConnections();
+} else {
+  const stopBackground = clustered ? null : startBackground();
+  const close = serveHttp(() => {
+    if (!clustered) logger.info(`Drabyard is up at ${e.APP_ORIGIN} (listening on ${e.HOST}:${e.PORT})`);
+  });
+  onSignals(async (signal) => {
+    if (!clustered) logger.info({ signal }, 'shutting down: finishing open requests');
+    close(async () => {
+      await stopBackground?.();
+      await closeDb().catch(() => {});
+      closeMailer();
+      if (!clustered) logger.info('stopped');
+      process.exit(0);
+    });
+  });
+  if (clustered) {
+    // A worker whose primary is gone (killed) has nobody to answer to: it stops too.
+    process.on('disconnect', () => process.exit(0));
+  }
 }
-process.on('SIGINT', () => void shutdown('SIGINT'));
-process.on('SIGTERM', () => void shutdown('SIGTERM'));

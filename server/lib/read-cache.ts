@@ -1,25 +1,31 @@
 import { LRUCache } from 'lru-cache';
 
 /**
- * Short-lived caches for public catalog reads (vehicles, assemblies, parts, number resolution). Catalog edits
- * clear them in this process; other app servers see changes within the TTL, which is short for that reason.
+ * Short-lived caches for public reads (catalog pages, number resolution, listing pages, searches). Catalog
+ * edits clear them in this process; other app processes see changes within the TTL, which is short for that
+ * reason.
+ *
+ * Reads go through lru-cache's fetch(): concurrent misses of one key share a single load (no stampede when a
+ * popular entry expires under load), and an expired entry is served while its fresh value loads.
  */
-const caches: Array<LRUCache<string, object>> = [];
+type Loader = () => Promise<object>;
+const caches: Array<LRUCache<string, object, Loader>> = [];
 
 /** Off in tests, where factories write straight to the database between reads; READ_CACHE=on forces it on. */
 const enabled = () => process.env.READ_CACHE === 'on' || (process.env.NODE_ENV !== 'test' && process.env.READ_CACHE !== 'off');
 
 export function readCache<T extends object>(opts: { max: number; ttlMs: number }) {
-  const cache = new LRUCache<string, object>({ max: opts.max, ttl: opts.ttlMs });
+  const cache = new LRUCache<string, object, Loader>({
+    max: opts.max,
+    ttl: opts.ttlMs,
+    allowStale: true,
+    fetchMethod: (_key, _stale, { context }) => context(),
+  });
   caches.push(cache);
   return {
     async get(key: string, load: () => Promise<T>): Promise<T> {
       if (!enabled()) return load();
-      const hit = cache.get(key);
-      if (hit) return hit as T;
-      const value = await load();
-      cache.set(key, value);
-      return value;
+      return (await cache.fetch(key, { context: load })) as T;
     },
     /** Values for many keys: hits from the cache, the rest from one call of loadMissing (keys it omits stay uncached). */
     async getMany(keys: string[], loadMissing: (missing: string[]) => Promise<Map<string, T>>): Promise<Map<string, T>> {

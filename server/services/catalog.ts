@@ -40,7 +40,13 @@ export function partSummary(p: PartRow, primary: string | undefined) {
   return { id: p.id, name: p.name, category: p.category, safetyClass: p.safetyClass, primaryNumber: primary ?? null };
 }
 
-export async function listVehicles() {
+const vehicleListCache = readCache<Awaited<ReturnType<typeof loadVehicleList>>>({ max: 1, ttlMs: 30_000 });
+
+export function listVehicles() {
+  return vehicleListCache.get('all', loadVehicleList);
+}
+
+async function loadVehicleList() {
   const db = getDb();
   const rows = await db.select().from(vehicleModels).orderBy(asc(vehicleModels.name));
   const counts = await db.select({ vehicleId: assemblies.vehicleId, n: count() }).from(assemblies).groupBy(assemblies.vehicleId);

@@ -15,6 +15,7 @@ import { checkConditionGrade, conditions, rubberUses, usedGrades } from '../doma
 import { allowedActions, transition, type ListingAction, type ListingActor, type ListingState } from '../domain/listing-states';
 import { AppError, forbidden, invalidState, notFound } from '../errors';
 import { audit } from '../lib/audit';
+import { readCache } from '../lib/read-cache';
 import { getPart, primaryNumbers, setLiveListingCounter } from './catalog';
 import { inferDescriptionFormat, renderDescription } from './listing-description';
 import { flagsOf, refreshFlags, type FlagDto } from './listing-flags';
@@ -489,7 +490,17 @@ export async function sellerCard(sellerId: string): Promise<SellerCard> {
 }
 
 /** Everything the public listing page shows. Private states are visible to their seller and administrators only. */
-export async function getListingPage(id: string, viewer: SessionUser | undefined) {
+/**
+ * Anonymous visitors share a briefly cached page (the busiest read of the shop); sellers and administrators
+ * always read it fresh. Stock shown may lag a few seconds; checkout counts the real stock.
+ */
+const publicListingPages = readCache<Awaited<ReturnType<typeof loadListingPage>>>({ max: 5000, ttlMs: 5_000 });
+
+export function getListingPage(id: string, viewer: SessionUser | undefined) {
+  return viewer ? loadListingPage(id, viewer) : publicListingPages.get(id, () => loadListingPage(id, undefined));
+}
+
+async function loadListingPage(id: string, viewer: SessionUser | undefined) {
   const db = getDb();
   const [row] = await db.select().from(listings).where(eq(listings.id, id));
   if (!row) throw notFound('Listing');

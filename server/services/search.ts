@@ -598,6 +598,35 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
 }
 
 // ---------------------------------------------------------------------------------------------------------
+// Shared answers for identical searches
+// ---------------------------------------------------------------------------------------------------------
+
+let replies: { get(key: string, load: () => Promise<SearchReply>): Promise<SearchReply> } | null | undefined;
+let suggestions: { get(key: string, load: () => Promise<SuggestReply>): Promise<SuggestReply> } | null | undefined;
+
+/**
+ * search() through a short-lived cache: popular searches (the same words and filters within
+ * SEARCH_CACHE_SECONDS) share one answer, so a burst of them costs one run. Answers do not depend on who
+ * asks. Prices and stock in a shared answer may lag that many seconds; the listing and checkout are exact.
+ */
+export function searchShared(q: SearchQuery): Promise<SearchReply> {
+  if (replies === undefined) {
+    const s = env().SEARCH_CACHE_SECONDS;
+    replies = s > 0 ? readCache<SearchReply>({ max: 2000, ttlMs: s * 1000 }) : null;
+  }
+  return replies ? replies.get(JSON.stringify(q), () => search(q)) : search(q);
+}
+
+/** suggest() through the same kind of cache (people type the same beginnings). */
+export function suggestShared(text: string): Promise<SuggestReply> {
+  if (suggestions === undefined) {
+    const s = env().SEARCH_CACHE_SECONDS;
+    suggestions = s > 0 ? readCache<SuggestReply>({ max: 2000, ttlMs: s * 1000 }) : null;
+  }
+  return suggestions ? suggestions.get(text, () => suggest(text)) : suggest(text);
+}
+
+// ---------------------------------------------------------------------------------------------------------
 // suggest()
 // ---------------------------------------------------------------------------------------------------------
 
