@@ -5,6 +5,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { runMigrations } from '../server/db/migrate';
@@ -111,7 +112,9 @@ async function start(dev: boolean) {
       cluster?.stop();
       process.exit(1);
     }
-    children.push(spawn(bin('tsx'), ['server/index.ts'], { cwd: root, stdio: 'inherit', env: { ...env, NODE_ENV: process.env.NODE_ENV ?? 'production' } }));
+    // One HTTP process per core (server/index.ts forks them; WEB_CONCURRENCY overrides).
+    const webConcurrency = process.env.WEB_CONCURRENCY ?? String(os.availableParallelism());
+    children.push(spawn(bin('tsx'), ['server/index.ts'], { cwd: root, stdio: 'inherit', env: { ...env, NODE_ENV: process.env.NODE_ENV ?? 'production', WEB_CONCURRENCY: webConcurrency } }));
     say(`open ${origin} — demo accounts are listed in README.md (password drabyard-demo). Ctrl-C stops everything.`);
   }
   let stopping = false;
