@@ -1,8 +1,15 @@
 // `npm run bench:load`: the app under load on this machine. Provisions its own database (drabyard_load on the
-// private bench cluster) with the demo data, starts the app as a production child process with the mail and
-// Stripe stand-ins, then runs 200 autocannon connections of mixed browsing, search and part pages for 60 s
-// (BENCH_SECONDS to shorten; BENCH_APP_NODE_ARGS="--cpu-prof --cpu-prof-dir=DIR" to profile the app) while 20 buyers check out over and over, prints throughput, p50/p95/p99 and
-// errors against the targets, a per-endpoint sample, and finally races 200 buyers for a listing of 5 units.
+// private bench cluster) with the demo data, starts the app as `npm start` runs it (production, one HTTP process
+// per core) with the mail and Stripe stand-ins, and then:
+//   1. a per-endpoint sample, sequential (what each costs alone);
+//   2. a warm-up of the paced mix, not measured (BENCH_WARMUP_SECONDS, 15);
+//   3. the target run: 200 autocannon connections of mixed browsing, search and part pages for 60 s
+//      (BENCH_SECONDS) offering 560 req/s in all (BENCH_RATE), spread evenly over time, while 20 buyers check out
+//      over and over (BENCH_CHECKOUT_BUYERS); throughput, p50/p95/p99 and errors against the targets;
+//   4. a saturation run for the record (BENCH_SATURATION_SECONDS, 20): every connection asks again as soon as it
+//      is answered, which finds the ceiling (latency there is queueing: Little's law);
+//   5. a race of 200 buyers for a listing of 5 units.
+// BENCH_APP_NODE_ARGS="--cpu-prof --cpu-prof-dir=DIR" profiles the app; BENCH_TIMELINE=1 prints latency per 2 s.
 // Everything stays on loopback; every loop is bounded in time. All data is the fictional demo seed.
 import { spawn, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
