@@ -384,3 +384,26 @@ describe('search: suggestions and the shared code tables', () => {
     }
   });
 });
+
+describe('search: shared answers for identical searches', () => {
+  it('when the same search comes again within the cache time, then it gets the same answer until the caches are cleared', async () => {
+    const { clearReadCaches } = await import('../../server/lib/read-cache');
+    const w = word();
+    await createPart({ name: `Bracket ${w}` });
+    process.env.READ_CACHE = 'on';
+    try {
+      const first = await find({ q: w });
+      expect(first.total).toBe(1);
+      await createPart({ name: `Bracket ${w} late` });
+      // Shared: the part made since is not in the answer yet.
+      expect((await find({ q: w })).total).toBe(1);
+      // A different search is its own answer.
+      expect((await find({ q: w, type: 'part' })).total).toBe(2);
+      clearReadCaches();
+      expect((await find({ q: w })).total).toBe(2);
+    } finally {
+      delete process.env.READ_CACHE;
+      clearReadCaches();
+    }
+  });
+});
