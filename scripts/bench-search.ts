@@ -363,10 +363,12 @@ function printProfile(timed: Timed[]) {
     console.log(`\n  profile ${c}: ${rows.length} searches, mean ${(total / rows.length).toFixed(1)} ms, of it in logged statements ${(logged / rows.length).toFixed(1)} ms`);
     for (const [k, e] of [...by].sort((a, b) => b[1].ms - a[1].ms))
       console.log(`    ${k.padEnd(14)} ${(e.n / rows.length).toFixed(2).padStart(5)} per search  ${(e.ms / rows.length).toFixed(2).padStart(6)} ms per search  ${(e.ms / e.n).toFixed(2).padStart(6)} ms each`);
+    const byHttp = [...rows].sort((a, b) => b.http - a.http).slice(0, Math.ceil(rows.length * 0.06));
+    console.log(`    slowest over HTTP: ${byHttp.map((t) => `${t.http.toFixed(1)}/${t.sql.toFixed(1)} ${String(t.q.params.q ?? '').slice(0, 18)}`).join(', ')}`);
     // The searches at the category's 95th percentile and above, statement by statement.
     for (const t of [...rows].sort((a, b) => b.sql - a.sql).slice(0, Math.max(3, Math.ceil(rows.length * 0.05))).slice(0, 8)) {
       const steps = (t.statements ?? []).map((st) => `${kindOf(st.sql)} ${st.ms.toFixed(1)}`).join(', ');
-      console.log(`    slow: ${t.sql.toFixed(1)} ms  ${queryString(t.q.params).slice(0, 90)}\n          ${steps}`);
+      console.log(`    slow: ${t.sql.toFixed(1)} ms (HTTP ${t.http.toFixed(1)} ms)  ${queryString(t.q.params).slice(0, 90)}\n          ${steps}`);
     }
   }
 }

@@ -58,16 +58,18 @@ async function findSeeds(key: string, folded: string): Promise<{ via: NumberMatc
       WHERE ${key.length >= 3 ? sql`NOT EXISTS (SELECT 1 FROM exact)` : sql`false`} AND key LIKE ${key + '%'} LIMIT ${SEED_LIMIT}),
     seeds AS MATERIALIZED (SELECT 'exact' AS via, * FROM exact UNION ALL SELECT 'prefix', * FROM prefix),`;
   let found = await seedsWithGraph(levels, 'number_seeds');
-  if (!found) {
-    const near = nearFoldedKeys(folded);
-    if (!near.length) return null;
+  // One typo away: the likely typos first (a smaller set of keys), the rest only when they find nothing.
+  for (const which of ['likely', 'rest'] as const) {
+    if (found) break;
+    const near = nearFoldedKeys(folded, which);
+    if (!near.length) continue;
     found = await seedsWithGraph(
       sql`seeds AS MATERIALIZED (SELECT 'near' AS via, n.part_id, n.printed, n.key, n.folded
         FROM unnest(${sql.param(near)}::text[]) k JOIN part_numbers n ON n.folded = k LIMIT ${SEED_LIMIT}),`,
       'number_near_seeds',
     );
-    if (!found) return null;
   }
+  if (!found) return null;
   const { seeds, graph } = found;
   const level = seeds[0].via;
   const via: NumberMatch = level === 'exact' ? (seeds.some((r) => r.key === key) ? 'exact' : 'alternate') : level;

@@ -28,6 +28,26 @@ describe('nearFoldedKeys', () => {
     for (const typo of ['QX4410B8', 'QX440B7', 'QX44100B7', 'QX4140B7']) expect(nearFoldedKeys(foldKey(typo)), typo).toContain(right);
   });
 
+  it('when a digit is mistyped among digits or a character dropped, then the likely neighbours already hold the right key', () => {
+    const right = foldKey('QX4410B7');
+    for (const typo of ['QX4470B7', 'QX440B7', 'QX4140B7', 'QX44100B7']) expect(nearFoldedKeys(foldKey(typo), 'likely'), typo).toContain(right);
+    // A letter typed for a digit is one edit away too, but only among the rest.
+    expect(nearFoldedKeys(foldKey('QX44K0B7'), 'likely')).not.toContain(right);
+    expect(nearFoldedKeys(foldKey('QX44K0B7'), 'rest')).toContain(right);
+  });
+
+  it('when split into likely and rest, then the two parts share nothing and together are all the neighbours', () => {
+    for (const k of [foldKey('KV20417C'), foldKey('2530001234567')]) {
+      const likely = nearFoldedKeys(k, 'likely');
+      const rest = nearFoldedKeys(k, 'rest');
+      expect(likely.filter((x) => rest.includes(x))).toEqual([]);
+      expect(new Set([...likely, ...rest])).toEqual(new Set(nearFoldedKeys(k)));
+    }
+    // A run of digits: about a third of the neighbours are the likely ones.
+    const digitsOnly = foldKey('2530001234567');
+    expect(nearFoldedKeys(digitsOnly, 'likely').length * 2).toBeLessThan(nearFoldedKeys(digitsOnly, 'rest').length);
+  });
+
   it('when a key is very short or very long, then no neighbours are tried', () => {
     expect(nearFoldedKeys('A1')).toEqual([]);
     expect(nearFoldedKeys('1'.repeat(30))).toEqual([]);

@@ -53,23 +53,41 @@ export function isNumberQuery(q: string): boolean {
 
 // A folded key holds no letter O or I (they were folded to 0 and 1).
 const FOLDED_ALPHABET = 'ABCDEFGHJKLMNPQRSTUVWXYZ0123456789';
+const DIGITS = '0123456789';
+const LETTERS = 'ABCDEFGHJKLMNPQRSTUVWXYZ';
+const classOf = (c: string | undefined) => (c === undefined ? '' : /\d/.test(c) ? DIGITS : LETTERS);
 
 /**
  * Folded keys one edit away from `folded` (a dropped, doubled-up, swapped or mistyped character), each folded
  * again so leading zeros match the stored form. Bounded: keys longer than 24 characters get none.
+ *
+ * `likely` is the smaller set tried first: drops and swaps, and a digit mistyped or missed among digits, a
+ * letter among letters (common practice, no published source: stamped and hand-copied numbers go wrong within a
+ * run of digits far more often than across). `rest` is everything else one edit away; `all` is both.
  */
-export function nearFoldedKeys(folded: string): string[] {
+export function nearFoldedKeys(folded: string, which: 'likely' | 'rest' | 'all' = 'all'): string[] {
   if (folded.length < 4 || folded.length > 24) return [];
-  const out = new Set<string>();
+  const likely = new Set<string>();
+  const other = new Set<string>();
   const n = folded.length;
-  for (let i = 0; i < n; i++) out.add(folded.slice(0, i) + folded.slice(i + 1));
-  for (let i = 0; i < n - 1; i++) out.add(folded.slice(0, i) + folded[i + 1] + folded[i] + folded.slice(i + 2));
-  for (let i = 0; i < n; i++) for (const c of FOLDED_ALPHABET) if (c !== folded[i]) out.add(folded.slice(0, i) + c + folded.slice(i + 1));
-  for (let i = 0; i <= n; i++) for (const c of FOLDED_ALPHABET) out.add(folded.slice(0, i) + c + folded.slice(i));
-  const result = new Set<string>();
-  for (const k of out) {
-    const f = foldKey(k);
-    if (f !== folded && f.length >= 3) result.add(f);
+  for (let i = 0; i < n; i++) likely.add(folded.slice(0, i) + folded.slice(i + 1));
+  for (let i = 0; i < n - 1; i++) likely.add(folded.slice(0, i) + folded[i + 1] + folded[i] + folded.slice(i + 2));
+  for (let i = 0; i < n; i++) {
+    const same = classOf(folded[i]);
+    for (const c of FOLDED_ALPHABET) if (c !== folded[i]) (same.includes(c) ? likely : other).add(folded.slice(0, i) + c + folded.slice(i + 1));
   }
+  for (let i = 0; i <= n; i++) {
+    const near = classOf(folded[i - 1]) + classOf(folded[i]);
+    for (const c of FOLDED_ALPHABET) (near.includes(c) ? likely : other).add(folded.slice(0, i) + c + folded.slice(i));
+  }
+  const pick = which === 'likely' ? [likely] : which === 'rest' ? [other] : [likely, other];
+  const result = new Set<string>();
+  for (const set of pick)
+    for (const k of set) {
+      if (which === 'rest' && likely.has(k)) continue;
+      const f = foldKey(k);
+      if (f !== folded && f.length >= 3) result.add(f);
+    }
+  if (which === 'rest') for (const k of likely) result.delete(foldKey(k));
   return [...result];
 }

@@ -519,6 +519,7 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   let numberInfo: Map<string, NumberHitPart> | null = null;
   let fixes = new Map<string, string>();
   let numberKey: string | null = null;
+  let closeEarly: ReturnType<typeof closeNumbers> | null = null;
 
   if (chunks.length && isNumberQuery(text)) {
     const r = await resolveNumberHits(text);
@@ -527,6 +528,13 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
       numberInfo = new Map(r.parts.map((p) => [p.partId, p]));
       match = { kind: 'number', partIds: r.parts.map((p) => p.partId), scores: r.parts.map((p) => p.score), keys: [...new Set([r.key, r.folded])] };
       matchMode = 'number';
+      // No part carries the number: the answer is almost surely empty, so its close numbers are looked up now,
+      // beside the scan, rather than after it.
+      if (!r.parts.length && !cursor) {
+        closeEarly = closeNumbers(r.key);
+        // Handled here too, so a failure while the scan is still running is never an unhandled rejection.
+        closeEarly.catch(() => undefined);
+      }
     }
   }
   if (match.kind === 'browse' && chunks.length) {
@@ -582,7 +590,7 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   let didYouMean: SearchReply['didYouMean'] = [];
   if (total === 0 && !cursor) {
     const key = numberKey ?? chunks.find((c) => c.key)?.key ?? null;
-    if (key) didYouMean = await closeNumbers(key);
+    if (key) didYouMean = await (closeEarly ?? closeNumbers(key));
   }
   return {
     total,
