@@ -50,7 +50,7 @@ const byKey = (a: NumberRow, b: NumberRow) => (a.key < b.key ? -1 : a.key > b.ke
  * a key prefix (one round trip: the prefix level runs only when the exact one found nothing), else the folded
  * keys one typo away (a second round trip, needed by few searches). Btree indexes only.
  */
-async function findSeeds(key: string, folded: string): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
+async function findSeeds(key: string, folded: string, notExact?: () => void): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
   // Keys are letters and digits only, so the LIKE pattern needs no escaping; text_pattern_ops serves it.
   const levels = sql`
     exact AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers WHERE key = ${key} OR folded = ${folded} LIMIT 200),
@@ -58,6 +58,7 @@ async function findSeeds(key: string, folded: string): Promise<{ via: NumberMatc
       WHERE ${key.length >= 3 ? sql`NOT EXISTS (SELECT 1 FROM exact)` : sql`false`} AND key LIKE ${key + '%'} LIMIT ${SEED_LIMIT}),
     seeds AS MATERIALIZED (SELECT 'exact' AS via, * FROM exact UNION ALL SELECT 'prefix', * FROM prefix),`;
   let found = await seedsWithGraph(levels, 'number_seeds');
+  if (!found) notExact?.();
   // One typo away: the likely typos first (a smaller set of keys), the rest only when they find nothing.
   for (const which of ['likely', 'rest'] as const) {
     if (found) break;
@@ -108,13 +109,16 @@ function relation(interchange: Interchange, conditions: string[]): string {
   return interchangeLabels[interchange];
 }
 
-/** Resolves a typed number to scored hit parts; null when nothing carries it (the caller proposes close numbers). */
-export async function resolveNumberHits(typed: string): Promise<NumberResolution | null> {
+/**
+ * Resolves a typed number to scored hit parts; null when the text is not a number. `notExact` is called as soon
+ * as neither the number nor a prefix of it is known (the caller may start on close numbers meanwhile).
+ */
+export async function resolveNumberHits(typed: string, notExact?: () => void): Promise<NumberResolution | null> {
   const parsed = parsePartNumber(typed);
   if (!parsed.ok) return null;
   const { key, folded } = parsed.value;
   const lower = { key: key.toLowerCase(), folded: folded.toLowerCase() };
-  const seeds = await findSeeds(key, folded);
+  const seeds = await findSeeds(key, folded, notExact);
   if (!seeds) return { ...lower, via: null, parts: [] };
 
   const seedIds = [...new Set(seeds.rows.map((r) => r.part_id))];

@@ -522,19 +522,21 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   let closeEarly: ReturnType<typeof closeNumbers> | null = null;
 
   if (chunks.length && isNumberQuery(text)) {
-    const r = await resolveNumberHits(text);
+    // An unknown number usually ends in the empty state: its close numbers (a trigram search) start as soon as
+    // the exact and prefix lookups come back empty, beside the typo lookups and the scan.
+    const r = await resolveNumberHits(text, () => {
+      if (cursor) return;
+      const p = parsePartNumber(text);
+      if (!p.ok) return;
+      closeEarly = closeNumbers(p.value.key.toLowerCase());
+      // Handled here too, so a failure while the rest is still running is never an unhandled rejection.
+      closeEarly.catch(() => undefined);
+    });
     if (r) {
       numberKey = r.key;
       numberInfo = new Map(r.parts.map((p) => [p.partId, p]));
       match = { kind: 'number', partIds: r.parts.map((p) => p.partId), scores: r.parts.map((p) => p.score), keys: [...new Set([r.key, r.folded])] };
       matchMode = 'number';
-      // No part carries the number: the answer is almost surely empty, so its close numbers are looked up now,
-      // beside the scan, rather than after it.
-      if (!r.parts.length && !cursor) {
-        closeEarly = closeNumbers(r.key);
-        // Handled here too, so a failure while the scan is still running is never an unhandled rejection.
-        closeEarly.catch(() => undefined);
-      }
     }
   }
   if (match.kind === 'browse' && chunks.length) {
