@@ -611,30 +611,25 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
 // Shared answers for identical searches
 // ---------------------------------------------------------------------------------------------------------
 
-let replies: { get(key: string, load: () => Promise<SearchReply>): Promise<SearchReply> } | null | undefined;
-let suggestions: { get(key: string, load: () => Promise<SuggestReply>): Promise<SuggestReply> } | null | undefined;
-
 /**
- * search() through a short-lived cache: popular searches (the same words and filters within
- * SEARCH_CACHE_SECONDS) share one answer, so a burst of them costs one run. Answers do not depend on who
- * asks. Prices and stock in a shared answer may lag that many seconds; the listing and checkout are exact.
+ * A function through a short-lived cache: identical calls within SEARCH_CACHE_SECONDS share one answer, so a
+ * burst of popular searches costs one run. Answers do not depend on who asks. Prices and stock in a shared
+ * answer may lag that many seconds; the listing and checkout are exact.
  */
-export function searchShared(q: SearchQuery): Promise<SearchReply> {
-  if (replies === undefined) {
-    const s = env().SEARCH_CACHE_SECONDS;
-    replies = s > 0 ? readCache<SearchReply>({ max: 2000, ttlMs: s * 1000 }) : null;
-  }
-  return replies ? replies.get(JSON.stringify(q), () => search(q)) : search(q);
+function sharedAnswers<A, T extends object>(fn: (a: A) => Promise<T>, keyOf: (a: A) => string): (a: A) => Promise<T> {
+  let cache: ReturnType<typeof readCache<T>> | null | undefined;
+  return (a) => {
+    if (cache === undefined) {
+      const s = env().SEARCH_CACHE_SECONDS;
+      cache = s > 0 ? readCache<T>({ max: 2000, ttlMs: s * 1000 }) : null;
+    }
+    return cache ? cache.get(keyOf(a), () => fn(a)) : fn(a);
+  };
 }
 
-/** suggest() through the same kind of cache (people type the same beginnings). */
-export function suggestShared(text: string): Promise<SuggestReply> {
-  if (suggestions === undefined) {
-    const s = env().SEARCH_CACHE_SECONDS;
-    suggestions = s > 0 ? readCache<SuggestReply>({ max: 2000, ttlMs: s * 1000 }) : null;
-  }
-  return suggestions ? suggestions.get(text, () => suggest(text)) : suggest(text);
-}
+export const searchShared = sharedAnswers(search, (q: SearchQuery) => JSON.stringify(q));
+/** Suggestions the same way (people type the same beginnings). */
+export const suggestShared = sharedAnswers(suggest, (text: string) => text);
 
 // ---------------------------------------------------------------------------------------------------------
 // suggest()
