@@ -10,6 +10,7 @@ import {
   listingDecisionInput,
   listingFlagCodes,
   listingStateCodes,
+  myListingsQuery,
   rubberUseCodes as sharedRubber,
   usedGradeCodes as sharedGrades,
 } from './listings';
@@ -42,5 +43,10 @@ describe('shared listing schemas', () => {
     expect(listingDecisionInput.safeParse({ decision: 'reject' }).success).toBe(false);
     expect(listingDecisionInput.safeParse({ decision: 'request-changes', message: 'ok' }).success).toBe(false);
     expect(listingDecisionInput.safeParse({ decision: 'approve' }).success).toBe(true);
+  });
+
+  it("when a seller's own-listings search holds control or zero-width characters, then they become spaces", () => {
+    const q = myListingsQuery.parse({ q: '  brake\u0000hose\u200b ' }).q;
+    expect(q).toBe('brake hose');
   });
 });

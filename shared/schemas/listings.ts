@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { cleanQueryText } from './text';
 
 /*
  * Listing inputs shared by the seller's form (react-hook-form resolver) and the server's validation.
@@ -109,7 +110,7 @@ export type UpdateListing = z.output<typeof updateListingInput>;
 export const myListingsSorts = ['updated', '-updated', 'created', '-created', 'price', '-price', 'title', '-title', 'quantity', '-quantity'] as const;
 export const myListingsQuery = z.object({
   state: z.enum(listingStateCodes).optional(),
-  q: z.string().trim().max(100).optional(),
+  q: z.string().max(100).transform(cleanQueryText).optional(),
   sort: z.enum(myListingsSorts).default('-updated'),
   page: z.coerce.number().int().min(1).max(10_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(200).default(50),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { cleanQueryText } from './text';
 
 /** Search request and reply shapes, shared by the server's validation and the client's search page. */
 
@@ -14,8 +15,6 @@ export const SEARCH_QUERY_MAX_LENGTH = 200;
 const MAX_VALUES = 20;
 const MAX_PRICE_CENTS = 100_000_000;
 
-// Control and format characters (NUL, escapes, zero-width marks) carry no meaning in a search: they become spaces.
-const cleanText = (s: string) => s.replace(/[\p{Cc}\p{Cf}\p{Cs}]/gu, ' ').trim();
 
 /** A parameter that may be repeated (`?condition=nos&condition=nors`) or given once. */
 const many = <T extends z.ZodType>(item: T, name: string) =>
@@ -33,7 +32,7 @@ export const searchQuery = z
     q: z
       .string()
       .max(SEARCH_QUERY_MAX_LENGTH * 2, `A search is at most ${SEARCH_QUERY_MAX_LENGTH} characters`)
-      .transform(cleanText)
+      .transform(cleanQueryText)
       .pipe(z.string().max(SEARCH_QUERY_MAX_LENGTH, `A search is at most ${SEARCH_QUERY_MAX_LENGTH} characters`))
       .optional(),
     type: z.enum(searchHitTypes).optional(),
@@ -80,7 +79,7 @@ export const suggestQuery = z
     q: z
       .string()
       .max(200, 'A search is at most 100 characters')
-      .transform(cleanText)
+      .transform(cleanQueryText)
       .pipe(z.string().min(1, 'Type something').max(100, 'A search is at most 100 characters')),
   })
   .strict();
