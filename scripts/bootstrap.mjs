@@ -22,8 +22,10 @@ if (!existsSync(path.join(root, 'node_modules', '.bin', 'tsx')) || stale) {
   }
 }
 
-const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
-const child = spawn(tsx, [path.join(root, 'scripts', 'run.ts'), mode, ...process.argv.slice(3)], {
+// node with tsx's loader rather than the tsx command: the command's own signal relay escalates to SIGKILL when a
+// child is slow to stop, and Ctrl-C reaches the runner twice (from the terminal and from here), which could end
+// it before it has stopped its PostgreSQL cluster.
+const child = spawn(process.execPath, ['--import', 'tsx', path.join(root, 'scripts', 'run.ts'), mode, ...process.argv.slice(3)], {
   cwd: root,
   stdio: 'inherit',
 });

@@ -114,7 +114,8 @@ async function start(dev: boolean) {
     }
     // One HTTP process per core (server/index.ts forks them; WEB_CONCURRENCY overrides).
     const webConcurrency = process.env.WEB_CONCURRENCY ?? String(os.availableParallelism());
-    children.push(spawn(bin('tsx'), ['server/index.ts'], { cwd: root, stdio: 'inherit', env: { ...env, NODE_ENV: process.env.NODE_ENV ?? 'production', WEB_CONCURRENCY: webConcurrency } }));
+    // node with tsx's loader (not the tsx command, whose signal relay may SIGKILL a primary still stopping its workers).
+    children.push(spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { cwd: root, stdio: 'inherit', env: { ...env, NODE_ENV: process.env.NODE_ENV ?? 'production', WEB_CONCURRENCY: webConcurrency } }));
     say(`open ${origin} — demo accounts are listed in README.md (password drabyard-demo). Ctrl-C stops everything.`);
   }
   let stopping = false;
