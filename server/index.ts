@@ -29,6 +29,15 @@ function serveHttp(onListening: () => void) {
   };
 }
 
+/** The last steps of stopping, in every process: background work (where it runs), database, mail, exit. */
+async function finish(stopBackground: (() => Promise<void>) | null, say: boolean) {
+  await stopBackground?.();
+  await closeDb().catch(() => {});
+  closeMailer();
+  if (say) logger.info('stopped');
+  process.exit(0);
+}
+
 let closing = false;
 function onSignals(shutdown: (signal: string) => Promise<void>) {
   const once = (signal: string) => {
@@ -60,11 +69,7 @@ if (clustered && cluster.isPrimary) {
     logger.info({ signal }, 'shutting down: finishing open requests');
     const workers = Object.values(cluster.workers ?? {});
     await Promise.all(workers.map((w) => new Promise<void>((resolve) => (w ? (w.once('exit', () => resolve()), w.kill('SIGTERM')) : resolve()))));
-    await stopBackground();
-    await closeDb().catch(() => {});
-    closeMailer();
-    logger.info('stopped');
-    process.exit(0);
+    await finish(stopBackground, true);
   });
 } else {
   const stopBackground = clustered ? null : startBackground();
@@ -73,13 +78,7 @@ if (clustered && cluster.isPrimary) {
   });
   onSignals(async (signal) => {
     if (!clustered) logger.info({ signal }, 'shutting down: finishing open requests');
-    close(async () => {
-      await stopBackground?.();
-      await closeDb().catch(() => {});
-      closeMailer();
-      if (!clustered) logger.info('stopped');
-      process.exit(0);
-    });
+    close(() => void finish(stopBackground, !clustered));
   });
   if (clustered) {
     // A worker whose primary is gone (killed) has nobody to answer to: it stops too.

@@ -84,10 +84,10 @@ export function nearFoldedKeys(folded: string, which: 'likely' | 'rest' | 'all' 
   const result = new Set<string>();
   for (const set of pick)
     for (const k of set) {
-      if (which === 'rest' && likely.has(k)) continue;
       const f = foldKey(k);
       if (f !== folded && f.length >= 3) result.add(f);
     }
+  // A key reached both ways (or folding to one reached the likely way) belongs to the likely part only.
   if (which === 'rest') for (const k of likely) result.delete(foldKey(k));
   return [...result];
 }
