@@ -1,6 +1,6 @@
 /**
  * The number branch of search: a typed part number in any shape -> the parts that carry it (exact key, then
- * the O/0 I/1 folded key, then a key prefix, then numbers one typo away, all on btree indexes) -> everything
+ * the O/0 I/1 folded key, then a key prefix, then numbers one typo away, all in one indexed statement) -> everything
  * that fills a need for those parts (the supersession rules of server/domain/supersession.ts: a one-way step is
  * never walked backwards) -> a score and a note per part saying how it relates to what was typed.
  */
@@ -10,7 +10,7 @@ import { parsePartNumber } from '../domain/part-number';
 import { fillersForPart, indexEdges, resolve, type FillerSet, type Interchange, type PartNumberRow, type SupersessionIndex } from '../domain/supersession';
 import { subgraphFromRow, subgraphStatement, type Subgraph, type SubgraphRow } from './catalog-graph';
 import { run } from '../db/run';
-import { nearFoldedKeys } from './search-text';
+import { nearFoldedKeys, nearLookupKeys } from './search-text';
 
 export type NumberMatch = 'exact' | 'alternate' | 'prefix' | 'near';
 
@@ -31,6 +31,8 @@ export interface NumberResolution {
 
 const KIND_ORDER = ['maker', 'ordnance', 'nsn', 'hardware_standard', 'reproduction', 'vendor'];
 const SEED_LIMIT = 50;
+/** Candidates of the typo level, before the exact edit check (most searches have a handful). */
+const NEAR_CANDIDATES = 400;
 
 interface NumberRow {
   part_id: string;
@@ -46,45 +48,47 @@ interface SeedRow extends NumberRow {
 const byKey = (a: NumberRow, b: NumberRow) => (a.key < b.key ? -1 : a.key > b.key ? 1 : a.printed.localeCompare(b.printed));
 
 /**
- * Finds the parts a typed number names and loads their supersession component: the exact or folded key, else
- * a key prefix (one round trip: the prefix level runs only when the exact one found nothing), else the folded
- * keys one typo away (a second round trip, needed by few searches). Btree indexes only.
+ * Finds the parts a typed number names and loads their supersession component, in one round trip: the exact
+ * or folded key, else a key prefix, else the keys one typo away (each level runs only when the ones before it
+ * found nothing). Btree indexes for the first two, the deletions index for typos; `notFound` is called as soon
+ * as none of them finds anything.
  */
-async function findSeeds(key: string, folded: string, notExact?: () => void): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
+async function findSeeds(key: string, folded: string, notFound?: () => void): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
   // Keys are letters and digits only, so the LIKE pattern needs no escaping; text_pattern_ops serves it.
   const levels = sql`
     exact AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers WHERE key = ${key} OR folded = ${folded} LIMIT 200),
     prefix AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers
       WHERE ${key.length >= 3 ? sql`NOT EXISTS (SELECT 1 FROM exact)` : sql`false`} AND key LIKE ${key + '%'} LIMIT ${SEED_LIMIT}),
-    seeds AS MATERIALIZED (SELECT 'exact' AS via, * FROM exact UNION ALL SELECT 'prefix', * FROM prefix),`;
-  let found = await seedsWithGraph(levels, 'number_seeds');
-  if (!found) notExact?.();
-  // One typo away: the likely typos first (a smaller set of keys), the rest only when they find nothing.
-  for (const which of ['likely', 'rest'] as const) {
-    if (found) break;
-    const near = nearFoldedKeys(folded, which);
-    if (!near.length) continue;
-    found = await seedsWithGraph(
-      sql`seeds AS MATERIALIZED (SELECT 'near' AS via, n.part_id, n.printed, n.key, n.folded
-        FROM unnest(${sql.param(near)}::text[]) k JOIN part_numbers n ON n.folded = k LIMIT ${SEED_LIMIT}),`,
-      'number_near_seeds',
-    );
+    near AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers
+      WHERE NOT EXISTS (SELECT 1 FROM exact) AND NOT EXISTS (SELECT 1 FROM prefix)
+        AND number_key_deletions(folded) && ${sql.param(nearLookupKeys(folded))}::text[] LIMIT ${NEAR_CANDIDATES}),
+    seeds AS MATERIALIZED (SELECT 'exact' AS via, * FROM exact UNION ALL SELECT 'prefix', * FROM prefix UNION ALL SELECT 'near', * FROM near),`;
+  const [row] = await run<SubgraphRow & { seeds: SeedRow[] | null } & Record<string, unknown>>(
+    subgraphStatement(sql`SELECT part_id FROM seeds`, levels, sql`, (SELECT json_agg(seeds) FROM seeds) AS seeds`),
+    { prepare: 'number_seeds' },
+  );
+  let rows = (row.seeds ?? []).sort(byKey);
+  if (rows[0]?.via === 'near') rows = nearest(folded, rows);
+  if (!rows.length) {
+    notFound?.();
+    return null;
   }
-  if (!found) return null;
-  const { seeds, graph } = found;
-  const level = seeds[0].via;
-  const via: NumberMatch = level === 'exact' ? (seeds.some((r) => r.key === key) ? 'exact' : 'alternate') : level;
-  return { via, rows: seeds, graph };
+  const level = rows[0].via;
+  const via: NumberMatch = level === 'exact' ? (rows.some((r) => r.key === key) ? 'exact' : 'alternate') : level;
+  return { via, rows, graph: subgraphFromRow(row) };
 }
 
-/** Runs seed-finding CTEs (ending in `seeds`) with the component of what they find; null when they find nothing. */
-async function seedsWithGraph(levels: ReturnType<typeof sql>, name: string): Promise<{ seeds: SeedRow[]; graph: Subgraph } | null> {
-  const rows = await run<SubgraphRow & { seeds: SeedRow[] | null } & Record<string, unknown>>(
-    subgraphStatement(sql`SELECT part_id FROM seeds`, levels, sql`, (SELECT json_agg(seeds) FROM seeds) AS seeds`),
-    { prepare: name },
-  );
-  const seeds = (rows[0].seeds ?? []).sort(byKey);
-  return seeds.length ? { seeds, graph: subgraphFromRow(rows[0]) } : null;
+/**
+ * Of the candidates the deletions index found (keys sharing a deletion with the typed one, so up to two edits
+ * away), those exactly one edit away: the likely typos when there are any, else the others.
+ */
+function nearest(folded: string, candidates: SeedRow[]): SeedRow[] {
+  for (const which of ['likely', 'rest'] as const) {
+    const near = new Set(nearFoldedKeys(folded, which));
+    const rows = candidates.filter((r) => near.has(r.folded));
+    if (rows.length) return rows.slice(0, SEED_LIMIT);
+  }
+  return [];
 }
 
 function primaryNumbers(numbers: PartNumberRow[]): Map<string, string> {
@@ -110,15 +114,15 @@ function relation(interchange: Interchange, conditions: string[]): string {
 }
 
 /**
- * Resolves a typed number to scored hit parts; null when the text is not a number. `notExact` is called as soon
- * as neither the number nor a prefix of it is known (the caller may start on close numbers meanwhile).
+ * Resolves a typed number to scored hit parts; null when the text is not a number. `notFound` is called as soon
+ * as the number is not known in any shape (the caller may start on close numbers meanwhile).
  */
-export async function resolveNumberHits(typed: string, notExact?: () => void): Promise<NumberResolution | null> {
+export async function resolveNumberHits(typed: string, notFound?: () => void): Promise<NumberResolution | null> {
   const parsed = parsePartNumber(typed);
   if (!parsed.ok) return null;
   const { key, folded } = parsed.value;
   const lower = { key: key.toLowerCase(), folded: folded.toLowerCase() };
-  const seeds = await findSeeds(key, folded, notExact);
+  const seeds = await findSeeds(key, folded, notFound);
   if (!seeds) return { ...lower, via: null, parts: [] };
 
   const seedIds = [...new Set(seeds.rows.map((r) => r.part_id))];
@@ -175,12 +179,12 @@ export async function resolveNumberHits(typed: string, notExact?: () => void): P
   return { ...lower, via: seeds.via, parts: [...out.values()] };
 }
 
-/** Close numbers by trigram similarity (the slow fallback, used only for the empty state). */
+/** Close numbers by trigram similarity (the fallback of the empty state; drizzle/0008_number_lookups.sql). */
 export async function closeNumbers(key: string, limit = 5): Promise<Array<{ number: string; partId: string }>> {
   if (key.length < 3) return [];
   const k = key.toUpperCase();
   const found = await run<{ printed: string; part_id: string }>(sql`
-    SELECT printed, part_id FROM part_numbers WHERE key % ${k} ORDER BY similarity(key, ${k}) DESC, printed LIMIT ${limit * 3}`, { prepare: 'close_numbers' });
+    SELECT printed, part_id FROM close_part_numbers(${k}, ${limit * 3})`, { prepare: 'close_numbers' });
   const seen = new Set<string>();
   const rows = found.filter((x) => !seen.has(x.part_id) && (seen.add(x.part_id), true)).slice(0, limit);
   return rows.map((x) => ({ number: x.printed, partId: x.part_id }));

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { foldKey } from '../domain/part-number';
-import { correctableWords, nearFoldedKeys, parseTextQuery } from './search-text';
+import { correctableWords, keyDeletions, nearFoldedKeys, nearLookupKeys, parseTextQuery } from './search-text';
 
 describe('parseTextQuery', () => {
   it('when the query holds tsquery operators and quotes, then they only separate words', () => {
@@ -51,5 +51,45 @@ describe('nearFoldedKeys', () => {
   it('when a key is very short or very long, then no neighbours are tried', () => {
     expect(nearFoldedKeys('A1')).toEqual([]);
     expect(nearFoldedKeys('1'.repeat(30))).toEqual([]);
+  });
+});
+
+describe('nearLookupKeys', () => {
+  // Deterministic pseudo-random keys (mulberry32), shaped like the catalog's: letters, digits, leading zeros.
+  const rng = (seed: number) => () => {
+    seed = (seed + 0x6d2b79f5) | 0;
+    let t = Math.imul(seed ^ (seed >>> 15), 1 | seed);
+    t = (t + Math.imul(t ^ (t >>> 7), 61 | t)) ^ t;
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+  const next = rng(42);
+  const pick = (s: string) => s[Math.floor(next() * s.length)];
+  const randomKey = () => {
+    const shape = ['LL000000L', '0000000000000', '00LL000', '0L0L0L'][Math.floor(next() * 4)];
+    return foldKey([...shape].map((c) => (c === 'L' ? pick('ABCDEFGHJKLMNPQRSTUVWXYZ') : pick('0012345678'))).join(''));
+  };
+
+  it('when a key is one edit from the typed one, then the two share a lookup key (symmetric deletion finds every neighbour)', () => {
+    for (let i = 0; i < 150; i++) {
+      const typed = randomKey();
+      const lookup = new Set(nearLookupKeys(typed));
+      for (const near of nearFoldedKeys(typed)) {
+        expect(keyDeletions(near).some((d) => lookup.has(d)), `${typed} -> ${near}`).toBe(true);
+      }
+    }
+  });
+
+  it('when an edit leaves leading zeros, then the neighbour it folds to is still found', () => {
+    // Dropping the A leaves 00523, which folds to 523; swapping 10 to 01 folds 01234 to 1234.
+    for (const [typed, near] of [['A00523', '523'], ['B07341', '7341'], ['10234', '1234']] as const) {
+      expect(nearFoldedKeys(typed)).toContain(near);
+      expect(keyDeletions(near).some((d) => nearLookupKeys(typed).includes(d)), typed).toBe(true);
+    }
+  });
+
+  it('when a key is very short or very long, then nothing is looked up, as with nearFoldedKeys', () => {
+    expect(nearLookupKeys('A12')).toEqual([]);
+    expect(nearLookupKeys('1'.repeat(25))).toEqual([]);
+    expect(keyDeletions('AAB')).toEqual(['AAB', 'AB', 'AA']);
   });
 });

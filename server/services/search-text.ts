@@ -57,6 +57,30 @@ const DIGITS = '0123456789';
 const LETTERS = 'ABCDEFGHJKLMNPQRSTUVWXYZ';
 const classOf = (c: string | undefined) => (c === undefined ? '' : /\d/.test(c) ? DIGITS : LETTERS);
 
+/** A key and every string made by dropping one of its characters (the SQL function number_key_deletions). */
+export function keyDeletions(k: string): string[] {
+  const out = new Set([k]);
+  for (let i = 0; i < k.length; i++) out.add(k.slice(0, i) + k.slice(i + 1));
+  return [...out];
+}
+
+/**
+ * What a typed folded key looks up in the deletions index (drizzle/0008_number_key_deletions.sql) to find every
+ * key nearFoldedKeys would name: its deletions, and those folded again (an edit that leaves leading zeros folds
+ * to a key more than one deletion away). Two keys one edit apart share a deletion (symmetric deletion: a
+ * dropped or added character leaves the shorter key, a changed one the key without it, a swap the key without
+ * either); candidates found this way are then checked against nearFoldedKeys. Empty where that gives none.
+ */
+export function nearLookupKeys(folded: string): string[] {
+  if (folded.length < 4 || folded.length > 24) return [];
+  const out = new Set<string>();
+  for (const d of keyDeletions(folded)) {
+    out.add(d);
+    out.add(foldKey(d));
+  }
+  return [...out];
+}
+
 /**
  * Folded keys one edit away from `folded` (a dropped, doubled-up, swapped or mistyped character), each folded
  * again so leading zeros match the stored form. Bounded: keys longer than 24 characters get none.

@@ -70,6 +70,44 @@ describe('search: part numbers in any shape', () => {
     expect(hitOf(prefix, part.id)?.matchedNumber).toBe(printed);
   });
 
+  it('when a character is dropped, added, mistyped or swapped anywhere, then the part is found as the closest number', async () => {
+    const printed = `JN-${digits(6)}-T4`;
+    const part = await createPart({ numbers: [{ number: printed }] });
+    const key = printed.replace(/-/g, '');
+    const typos = [
+      key.slice(1), // the first character dropped
+      key.slice(0, 4) + key.slice(5),
+      key.slice(0, -1), // the last dropped: also a prefix of nothing else, so found as a typo or a prefix
+      `J${key}`, // one added in front
+      key.slice(0, 5) + '3' + key.slice(5),
+      key.slice(0, 3) + (key[3] === '2' ? '9' : '2') + key.slice(4), // a digit for a digit
+      key.slice(0, 6) + 'K' + key.slice(7), // a letter for a digit (among the less likely typos)
+      key.slice(0, 3) + key[4] + key[3] + key.slice(5), // two swapped
+    ];
+    for (const typo of typos) {
+      const r = await find({ q: typo });
+      expect(hitOf(r, part.id)?.matchedNumber, typo).toBe(printed);
+    }
+  });
+
+  it('when a typo could be a likely slip for one number and a less likely one for another, then only the likely one is offered', async () => {
+    const body = digits(6);
+    const likely = await createPart({ numbers: [{ number: `HP-${body}-2` }] });
+    const other = await createPart({ numbers: [{ number: `HP-${body}-K` }] });
+    // HP…-7: a digit for a digit away from -2, a digit for a letter away from -K.
+    const r = await find({ q: `HP-${body}-7` });
+    expect(hitOf(r, likely.id)?.fitNote).toContain('closest number');
+    expect(hitOf(r, other.id)).toBeUndefined();
+  });
+
+  it('when the database folds a key into its deletions, then it gives what the application computes', async () => {
+    const { keyDeletions } = await import('../../server/services/search-text');
+    for (const k of ['BW280338B', 'AAB', '2920008062759', 'A', 'QQQQ']) {
+      const rows = (await getDb().execute<{ d: string[] }>(sql`SELECT number_key_deletions(${k}) AS d`)).rows;
+      expect(new Set(rows[0].d), k).toEqual(new Set(keyDeletions(k)));
+    }
+  });
+
   it('when nothing is close enough, then there are no hits and close numbers are proposed', async () => {
     const printed = `VR-${digits(6)}-M2`;
     const part = await createPart({ numbers: [{ number: printed }] });
