@@ -3,12 +3,12 @@
 // programmatic entry point; server.ts is the CLI around it.
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { payCheckoutSession, type PayInput, type PayOutcome } from './checkout-payment';
+import { payCheckoutSession, type PayInput, type PayOutcome, type ShippingInput } from './checkout-payment';
 import { expireDueSessions, expireSession } from './checkout';
 import { completeOnboarding } from './connect';
 import { canonicalForm, type FormObject, parseFormEncoded } from './form-encoding';
 import { newId } from './ids';
-import { indexPage, notFoundPage, onboardingPage, payPage, sessionClosedPage } from './pages';
+import { indexPage, notFoundPage, onboardingPage, payPage, type PayPageValues, sessionClosedPage } from './pages';
 import { API_ROUTES, matchRoute } from './routes';
 import { FakeState } from './state';
 import { StripeFakeError } from './stripe-error';
@@ -216,6 +216,7 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
       cvc: field(form, 'card_cvc'),
       email: field(form, 'email') || undefined,
       name: field(form, 'name') || undefined,
+      shipping: shippingFrom((k) => field(form, `shipping_${k}`)),
     };
     if (askEmail && !input.email) {
       return sendHtml(res, 400, payPage(session, lineItems, { askEmail, error: 'Enter your email address.', values: pageValues(input) }));
@@ -344,6 +345,10 @@ export async function startStripeFake(options: StripeFakeOptions): Promise<Strip
       cvc: optionalString(body.cvc ?? body.card_cvc),
       email: optionalString(body.email),
       name: optionalString(body.name),
+      shipping: shippingFrom((k) => {
+        const nested = body.shipping && typeof body.shipping === 'object' ? (body.shipping as Record<string, unknown>)[k] : undefined;
+        return optionalString(nested ?? body[`shipping_${k}`]) ?? '';
+      }),
     });
     switch (outcome.kind) {
       case 'paid':
@@ -500,8 +505,20 @@ function field(form: FormObject, name: string): string {
   return typeof value === 'string' ? value : '';
 }
 
-function pageValues(input: PayInput): { cardNumber: string; cardExpiry: string; email: string; name: string } {
-  return { cardNumber: input.number, cardExpiry: input.expiry ?? '', email: input.email ?? '', name: input.name ?? '' };
+function pageValues(input: PayInput): PayPageValues {
+  return { cardNumber: input.number, cardExpiry: input.expiry ?? '', email: input.email ?? '', name: input.name ?? '', shipping: input.shipping };
+}
+
+const SHIPPING_KEYS = ['name', 'line1', 'line2', 'city', 'state', 'postal_code', 'country'] as const;
+
+/** A shipping address from named values (page fields or a control body); undefined when none was given. */
+function shippingFrom(get: (key: (typeof SHIPPING_KEYS)[number]) => string): ShippingInput | undefined {
+  const out: ShippingInput = {};
+  for (const k of SHIPPING_KEYS) {
+    const v = get(k);
+    if (v) out[k] = v;
+  }
+  return Object.keys(out).length ? out : undefined;
 }
 
 function optionalString(value: unknown): string | undefined {

@@ -9,11 +9,46 @@ import { newId, nowSeconds } from './ids';
 import { cardProcessingFee } from './money';
 import type { FakeState } from './state';
 import { type StripeErrorBody, StripeFakeError } from './stripe-error';
-import type { Charge, CheckoutSession, Customer, PaymentIntent, PaymentMethod } from './types';
+import type { Charge, CheckoutSession, Customer, PaymentIntent, PaymentMethod, ShippingDetails } from './types';
+
+/** A shipping address as the payment page's fields give it (Stripe's address field names). */
+export interface ShippingInput {
+  name?: string;
+  line1?: string;
+  line2?: string;
+  city?: string;
+  state?: string;
+  postal_code?: string;
+  country?: string;
+}
 
 export interface PayInput extends CardInput {
   email?: string;
   name?: string;
+  shipping?: ShippingInput;
+}
+
+/** The address a session asks for, checked as the page checks it; an error message names the first gap. */
+export function checkShipping(session: CheckoutSession, input: ShippingInput | undefined): { ok: true; details: ShippingDetails | null } | { ok: false; message: string } {
+  const allowed = session.shipping_address_collection?.allowed_countries;
+  if (!allowed) return { ok: true, details: null };
+  const v = (x: string | undefined) => x?.trim() ?? '';
+  const country = v(input?.country).toUpperCase() || (allowed.length === 1 ? allowed[0] : '');
+  const missing = [
+    ['name', 'the name to ship to'],
+    ['line1', 'the street address'],
+    ['city', 'the city'],
+    ['postal_code', 'the postal code'],
+  ].find(([k]) => !v(input?.[k as keyof ShippingInput]));
+  if (missing) return { ok: false, message: `Enter ${missing[1]}.` };
+  if (!allowed.includes(country)) return { ok: false, message: `This shop does not ship to ${country || 'that country'}; choose one of ${allowed.join(', ')}.` };
+  return {
+    ok: true,
+    details: {
+      name: v(input?.name),
+      address: { line1: v(input?.line1), line2: v(input?.line2) || null, city: v(input?.city), state: v(input?.state) || null, postal_code: v(input?.postal_code), country },
+    },
+  };
 }
 
 export type PayOutcome =
@@ -35,6 +70,8 @@ export function payCheckoutSession(state: FakeState, sessionId: string, input: P
     // Stripe's own page rejects these before any charge exists.
     return { kind: 'rejected', session, error: { type: 'card_error', code: checked.error.code, message: checked.error.message } };
   }
+  const shipping = checkShipping(session, input.shipping);
+  if (!shipping.ok) return { kind: 'rejected', session, error: { type: 'invalid_request_error', code: 'shipping_address_invalid', message: shipping.message } };
   const destination = state.sessionPaymentIntentData.get(session.id)?.transfer_data?.destination;
   if (destination) {
     try {
@@ -148,6 +185,7 @@ export function payCheckoutSession(state: FakeState, sessionId: string, input: P
   session.url = null;
   session.customer = customerId;
   session.customer_details = { address: null, email, name: paymentMethod.billing_details.name, phone: null, tax_exempt: 'none', tax_ids: [] };
+  if (shipping.details) session.collected_information = { business_name: null, individual_name: null, shipping_details: shipping.details };
 
   state.emit('charge.succeeded', charge);
   state.emit('payment_intent.succeeded', intent);

@@ -59,6 +59,7 @@ const SESSION_FIELDS = {
   locale: str(),
   submit_type: oneOf(['auto', 'book', 'donate', 'pay']),
   billing_address_collection: oneOf(['auto', 'required']),
+  shipping_address_collection: obj({ allowed_countries: arr(str(), { required: true, maxItems: 250 }) }),
   allow_promotion_codes: bool(),
   expires_at: int(),
   ui_mode: oneOf(['hosted', 'embedded', 'custom']),
@@ -102,6 +103,7 @@ interface SessionParams {
   locale?: string;
   submit_type?: string;
   billing_address_collection?: string;
+  shipping_address_collection?: { allowed_countries: string[] };
   allow_promotion_codes?: boolean;
   expires_at?: number;
   ui_mode?: string;
@@ -162,6 +164,17 @@ export const createCheckoutSession: ApiHandler = ({ state, params, publicBaseUrl
     throw StripeFakeError.invalidParam('payment_intent_data[application_fee_amount]', 'The application fee cannot exceed the amount of the payment.');
   }
 
+  const shipping = p.shipping_address_collection;
+  if (shipping) {
+    if (shipping.allowed_countries.length === 0) {
+      throw StripeFakeError.invalidParam('shipping_address_collection[allowed_countries]', 'You must specify at least one allowed country.');
+    }
+    const bad = shipping.allowed_countries.find((c) => !/^[A-Z]{2}$/.test(c));
+    if (bad !== undefined) {
+      throw StripeFakeError.invalidParam('shipping_address_collection[allowed_countries]', `Invalid country code: ${bad}. Use two-letter ISO 3166-1 codes.`);
+    }
+  }
+
   let expiresAt = created + MAX_EXPIRY_SECONDS;
   if (p.expires_at !== undefined) {
     if (p.expires_at < created + MIN_EXPIRY_SECONDS) {
@@ -192,6 +205,8 @@ export const createCheckoutSession: ApiHandler = ({ state, params, publicBaseUrl
     customer_creation: p.customer ? null : (p.customer_creation ?? 'if_required'),
     customer_details: null,
     customer_email: p.customer_email ?? null,
+    collected_information: null,
+    shipping_address_collection: shipping ? { allowed_countries: [...new Set(shipping.allowed_countries)] } : null,
     expires_at: expiresAt,
     invoice: null,
     livemode: false,

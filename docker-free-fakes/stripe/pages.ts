@@ -1,6 +1,7 @@
 // The stand-in's own pages: hosted payment and seller onboarding. Plain HTML forms that work
 // without JavaScript; a neutral look of our own, clearly marked as a local test stand-in.
 import { formatMoney } from './money';
+import type { ShippingInput } from './checkout-payment';
 import type { Account, CheckoutSession, LineItem } from './types';
 
 export function escapeHtml(text: string): string {
@@ -19,10 +20,13 @@ const STYLE = `
   dt { font-weight: 600; } dd { margin: 0 0 .5rem; }
   tfoot td { font-weight: 700; border-bottom: 0; }
   label { display: block; font-weight: 600; margin-top: .9rem; }
+  fieldset { border: 1px solid #c9c9c2; border-radius: 4px; margin: 1rem 0 0; padding: 0 .75rem .75rem; }
+  legend { font-weight: 700; padding: 0 .25rem; }
+  select { font: inherit; width: 100%; padding: .5rem; border: 1px solid #8a8a82; border-radius: 4px; background: #fff; }
   input { font: inherit; width: 100%; box-sizing: border-box; padding: .5rem; border: 1px solid #8a8a82; border-radius: 4px; }
   .row { display: flex; gap: 1rem; } .row > div { flex: 1; }
   button { font: inherit; margin-top: 1.25rem; width: 100%; padding: .7rem; background: #2f4a2a; color: #fff; border: 0; border-radius: 4px; cursor: pointer; }
-  button:focus-visible, input:focus-visible, a:focus-visible { outline: 3px solid #d98f00; outline-offset: 2px; }
+  button:focus-visible, input:focus-visible, select:focus-visible, a:focus-visible { outline: 3px solid #d98f00; outline-offset: 2px; }
   .error { background: #fbe4e1; border: 1px solid #b3261e; color: #7a1410; padding: .5rem .75rem; border-radius: 4px; margin-top: 1rem; }
   .muted { color: #5b5b55; font-size: .9rem; }
 `;
@@ -50,6 +54,31 @@ export interface PayPageValues {
   cardExpiry?: string;
   email?: string;
   name?: string;
+  shipping?: ShippingInput;
+}
+
+const SHIPPING_FIELDS: Array<{ key: Exclude<keyof ShippingInput, 'country'>; label: string; autocomplete: string; required: boolean }> = [
+  { key: 'name', label: 'Full name', autocomplete: 'shipping name', required: true },
+  { key: 'line1', label: 'Street address', autocomplete: 'shipping address-line1', required: true },
+  { key: 'line2', label: 'Apartment, unit, building (optional)', autocomplete: 'shipping address-line2', required: false },
+  { key: 'city', label: 'City', autocomplete: 'shipping address-level2', required: true },
+  { key: 'state', label: 'State, province or region', autocomplete: 'shipping address-level1', required: false },
+  { key: 'postal_code', label: 'Postal code', autocomplete: 'shipping postal-code', required: true },
+];
+
+function shippingFieldset(allowed: readonly string[], values: ShippingInput): string {
+  const fields = SHIPPING_FIELDS.map(
+    (f) => `<label for="shipping-${f.key}">${escapeHtml(f.label)}</label>
+<input id="shipping-${f.key}" name="shipping_${f.key}" autocomplete="${f.autocomplete}"${f.required ? ' required' : ''} value="${escapeHtml(values[f.key] ?? '')}">`,
+  ).join('\n');
+  const chosen = values.country ?? allowed[0];
+  const options = allowed.map((c) => `<option value="${escapeHtml(c)}"${c === chosen ? ' selected' : ''}>${escapeHtml(c)}</option>`).join('');
+  return `<fieldset>
+<legend>Shipping address</legend>
+${fields}
+<label for="shipping-country">Country</label>
+<select id="shipping-country" name="shipping_country" autocomplete="shipping country">${options}</select>
+</fieldset>`;
 }
 
 export function payPage(session: CheckoutSession, lineItems: readonly LineItem[], options: { error?: string; values?: PayPageValues; askEmail: boolean }): string {
@@ -81,6 +110,7 @@ ${rows}
 ${error}
 <form method="post" action="/pay/${escapeHtml(session.id)}" novalidate>
 ${emailField}
+${session.shipping_address_collection ? shippingFieldset(session.shipping_address_collection.allowed_countries, values.shipping ?? {}) : ''}
 <label for="card-name">Name on card</label>
 <input id="card-name" name="name" autocomplete="cc-name" value="${escapeHtml(values.name ?? '')}">
 <label for="card-number">Card number</label>

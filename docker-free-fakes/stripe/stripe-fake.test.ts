@@ -207,6 +207,38 @@ describe('hosted payment page', () => {
     expect(await (await fetch(`${fake.url}/pay/${session.id}`)).text()).toContain('already been completed');
   });
 
+  it('when the session collects a shipping address, then the page asks for it, refuses a gap and the completed session carries it', async () => {
+    const session = await createSession({ customer_email: 'buyer@example.test', shipping_address_collection: { allowed_countries: ['CA'] } });
+    expect(session.shipping_address_collection).toEqual({ allowed_countries: ['CA'] });
+    expect(session.collected_information).toBeNull();
+    const html = await (await fetch(session.url!)).text();
+    for (const id of ['shipping-name', 'shipping-line1', 'shipping-city', 'shipping-postal_code', 'shipping-country']) expect(html).toContain(`id="${id}"`);
+    expect(html).toContain('<option value="CA" selected>CA</option>');
+
+    const card = { card_number: '4242 4242 4242 4242', card_expiry: '12 / 34', card_cvc: '123' };
+    const address = { shipping_name: 'Ada Fenner', shipping_line1: '7 Tannery Row', shipping_city: 'Hollin Ford', shipping_postal_code: 'K0K 9Z9', shipping_country: 'CA' };
+    const gap = await fetch(`${fake.url}/pay/${session.id}`, { method: 'POST', body: new URLSearchParams({ ...card, ...address, shipping_city: '' }), redirect: 'manual' });
+    expect(gap.status).toBe(400);
+    const page = await gap.text();
+    expect(page).toMatch(/role="alert"[^>]*>Enter the city\./);
+    expect(page).toContain('value="7 Tannery Row"'); // what was typed stays
+    expect((await stripe.checkout.sessions.retrieve(session.id)).status).toBe('open');
+
+    const paid = await fetch(`${fake.url}/pay/${session.id}`, { method: 'POST', body: new URLSearchParams({ ...card, ...address }), redirect: 'manual' });
+    expect(paid.status).toBe(303);
+    const after = await stripe.checkout.sessions.retrieve(session.id);
+    expect(after.collected_information?.shipping_details).toEqual({
+      name: 'Ada Fenner',
+      address: { line1: '7 Tannery Row', line2: null, city: 'Hollin Ford', state: null, postal_code: 'K0K 9Z9', country: 'CA' },
+    });
+  });
+
+  it('when allowed countries are not two-letter codes, then creating the session is a 400 naming the parameter', async () => {
+    const err = await createSession({ shipping_address_collection: { allowed_countries: ['Canada' as 'CA'] } }).catch((e: unknown) => e);
+    expect(err).toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
+    expect((err as Stripe.errors.StripeInvalidRequestError).param).toBe('shipping_address_collection[allowed_countries]');
+  });
+
   it('when the form is posted with the decline card, then the page shows the decline and the session stays open', async () => {
     const session = await createSession({ customer_email: 'buyer@example.test' });
     const body = new URLSearchParams({ card_number: '4000 0000 0000 0002', card_expiry: '12/34', card_cvc: '123' });

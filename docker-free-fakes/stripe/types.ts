@@ -11,6 +11,11 @@ export interface Address {
   state: string | null;
 }
 
+export interface ShippingDetails {
+  name: string;
+  address: Address;
+}
+
 export interface Customer {
   id: string;
   object: 'customer';
@@ -105,6 +110,9 @@ export interface CheckoutSession {
     tax_ids: never[];
   } | null;
   customer_email: string | null;
+  /** What the payment page collected beyond the card: the shipping address when asked for. */
+  collected_information: { business_name: null; individual_name: null; shipping_details: ShippingDetails | null } | null;
+  shipping_address_collection: { allowed_countries: string[] } | null;
   expires_at: number;
   invoice: null;
   livemode: false;

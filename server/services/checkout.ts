@@ -19,6 +19,8 @@ import { getStripe, stripeErrorInfo } from './stripe-client';
  * transfers in the order's transfer group once the payment is in).
  */
 
+type AllowedCountry = Stripe.Checkout.SessionCreateParams.ShippingAddressCollection.AllowedCountry;
+
 // source: Stripe's minimum charge amount for USD is $0.50 (Stripe docs, "Minimum and maximum charge amounts"), from memory
 const MIN_CHARGE_CENTS = 50;
 
@@ -137,6 +139,8 @@ export async function startCheckout(user: SessionUser, destination: Destination)
         client_reference_id: orderId,
         metadata: { orderId },
         payment_intent_data: { transfer_group: transferGroup, metadata: { orderId } },
+        // The sellers need the address to ship to; shipping was priced for this one country, so only it is offered.
+        ...(pickup ? {} : { shipping_address_collection: { allowed_countries: [destination.country as AllowedCountry] } }),
         expires_at: expiresAtSeconds,
         success_url: `${e.APP_ORIGIN}/orders/${orderId}?paid=1&session_id={CHECKOUT_SESSION_ID}`,
         cancel_url: `${e.APP_ORIGIN}/cart`,

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { and, asc, desc, eq, inArray, sql } from 'drizzle-orm';
-import type { Destination, OrderDto, OrderSummary, RefundInput, SellerSubOrderDto, ShipInput, SubOrderDto } from '../../shared/schemas/orders';
+import type { Destination, OrderDto, OrderSummary, RefundInput, SellerSubOrderDto, ShipInput, ShipTo, SubOrderDto } from '../../shared/schemas/orders';
 import type { SessionUser } from '../auth/require-role';
 import { getDb } from '../db/client';
 import { orderLines, orders, refunds, sellerProfiles, subOrders, transfers, users } from '../db/schema/index';
@@ -86,6 +86,7 @@ async function orderDto(order: OrderRow): Promise<OrderDto> {
     totalCents: order.totalCents,
     refundedCents: order.refundedCents,
     destination: order.destination as Destination,
+    shipTo: (order.shipTo as ShipTo | null) ?? null,
     createdAt: order.createdAt.toISOString(),
     paidAt: iso(order.paidAt),
     expiresAt: order.expiresAt.toISOString(),
@@ -130,13 +131,14 @@ export async function getOrderFor(user: SessionUser, orderId: string): Promise<O
 // ---------- seller ----------
 
 function sellerDto(
-  row: { s: SubOrderRow; sellerName: string; buyerName: string; buyerEmail: string; destination: unknown; paidAt: Date | null; transferState: string | null; transferCents: number | null },
+  row: { s: SubOrderRow; sellerName: string; buyerName: string; buyerEmail: string; destination: unknown; shipTo: unknown; paidAt: Date | null; transferState: string | null; transferCents: number | null },
   lines: LineRow[],
 ): SellerSubOrderDto {
   return {
     ...subOrderDto(row.s, row.sellerName, lines),
     buyer: { name: row.buyerName, email: row.buyerEmail },
     destination: row.destination as Destination,
+    shipTo: (row.shipTo as ShipTo | null) ?? null,
     feeCents: row.s.feeCents,
     shareCents: row.s.shareCents,
     paidAt: iso(row.paidAt),
@@ -152,6 +154,7 @@ function sellerQuery() {
       buyerName: users.displayName,
       buyerEmail: users.email,
       destination: orders.destination,
+      shipTo: orders.shipTo,
       paidAt: orders.paidAt,
       transferState: transfers.state,
       transferCents: transfers.amountCents,
@@ -402,7 +405,7 @@ export async function sendPaymentMails(orderId: string): Promise<void> {
           greeting: `Hello ${s.name},`,
           paragraphs: [
             `${order.buyerName} paid for: ${lines.filter((l) => l.subOrderId === s.s.id).map(lineText).join('; ')}.`,
-            s.s.pickup ? 'The buyer collects at pickup.' : `Shipping paid: ${money(s.s.shippingCents)}. Add the carrier and tracking number when it is on its way.`,
+            s.s.pickup ? 'The buyer collects at pickup.' : `Shipping paid: ${money(s.s.shippingCents)}. The address to ship to is on the order page (it is not sent by mail); add the carrier and tracking number there when it is on its way.`,
             `Your share after the platform fee: ${money(s.s.shareCents)}.`,
           ],
           action: { label: 'Open the order', url: `${origin}/seller/orders/${s.s.id}` },

@@ -1,5 +1,6 @@
 import { and, eq, sql } from 'drizzle-orm';
 import Stripe from 'stripe';
+import type { ShipTo } from '../../shared/schemas/orders';
 import { getDb } from '../db/client';
 import { orderLines, orders, refunds, stockReservations, stripeEvents, subOrders } from '../db/schema/index';
 import { AppError } from '../errors';
@@ -134,7 +135,7 @@ export async function onSessionCompleted(tx: Tx, session: Stripe.Checkout.Sessio
   await commitReservations(tx, order.id);
   await tx
     .update(orders)
-    .set({ state: 'paid', paidAt: new Date(), paymentIntentId, checkoutSessionId: session.id })
+    .set({ state: 'paid', paidAt: new Date(), paymentIntentId, checkoutSessionId: session.id, shipTo: shipToOf(session) })
     .where(eq(orders.id, order.id));
   await tx.update(subOrders).set({ state: 'paid' }).where(eq(subOrders.orderId, order.id));
   const bought = await tx
@@ -146,6 +147,16 @@ export async function onSessionCompleted(tx: Tx, session: Stripe.Checkout.Sessio
   await createTransferRows(tx, order.id);
   after.push(() => payPendingTransfers({ orderId: order.id }));
   after.push(() => sendPaymentMails(order.id));
+}
+
+/** The shipping address the buyer gave on the payment page, in our shape; null when none was collected. */
+export function shipToOf(session: Stripe.Checkout.Session): ShipTo | null {
+  const d = session.collected_information?.shipping_details;
+  const line1 = d?.address.line1;
+  const country = d?.address.country;
+  if (!d || !line1 || !country) return null;
+  const a = d.address;
+  return { name: d.name, line1, line2: a.line2 || null, city: a.city ?? '', state: a.state || null, postalCode: a.postal_code || null, country };
 }
 
 async function refundOversold(tx: Tx, order: typeof orders.$inferSelect, paymentIntentId: string | null, after: AfterCommit[]) {

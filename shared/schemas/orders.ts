@@ -139,6 +139,18 @@ export const refundSchema = z.object({
   createdAt: z.string(),
 });
 
+/** Where a shipped order goes, as the buyer gave it on the payment page (null for pickup, or before payment). */
+export const shipToSchema = z.object({
+  name: z.string(),
+  line1: z.string(),
+  line2: z.string().nullable(),
+  city: z.string(),
+  state: z.string().nullable(),
+  postalCode: z.string().nullable(),
+  country: z.string(),
+});
+export type ShipTo = z.infer<typeof shipToSchema>;
+
 export const orderSchema = z.object({
   id: z.string(),
   state: z.enum(orderStates),
@@ -147,6 +159,7 @@ export const orderSchema = z.object({
   totalCents: z.number().int(),
   refundedCents: z.number().int(),
   destination: destinationSchema,
+  shipTo: shipToSchema.nullable(),
   createdAt: z.string(),
   paidAt: z.string().nullable(),
   expiresAt: z.string(),
@@ -156,7 +169,7 @@ export const orderSchema = z.object({
 export type OrderDto = z.infer<typeof orderSchema>;
 export type SubOrderDto = z.infer<typeof subOrderSchema>;
 
-export const orderSummarySchema = orderSchema.omit({ subOrders: true, refunds: true }).extend({
+export const orderSummarySchema = orderSchema.omit({ subOrders: true, refunds: true, shipTo: true }).extend({
   sellerCount: z.number().int(),
   itemCount: z.number().int(),
 });
@@ -166,6 +179,7 @@ export type OrderSummary = z.infer<typeof orderSummarySchema>;
 export const sellerSubOrderSchema = subOrderSchema.extend({
   buyer: z.object({ name: z.string(), email: z.string() }),
   destination: destinationSchema,
+  shipTo: shipToSchema.nullable(),
   feeCents: z.number().int(),
   shareCents: z.number().int(),
   paidAt: z.string().nullable(),

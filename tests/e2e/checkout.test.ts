@@ -94,6 +94,13 @@ describe('checkout in the browser', () => {
     await page.waitForURL((u) => u.pathname.startsWith('/pay/'));
     // The stand-in prints "25.65 USD": the same amount in its own format.
     expect(await page.locator('#amount-due').innerText()).toBe(`${(cart.totalCents / 100).toFixed(2)} USD`);
+    // Shipping: the page asks where to, in the one country the shipping was priced for.
+    await page.getByLabel('Full name').fill('Ada Fenner');
+    await page.getByLabel('Street address').fill('7 Tannery Row');
+    await page.getByLabel('City').fill('Hollin Ford');
+    await page.getByLabel('State, province or region').fill('OH');
+    await page.getByLabel('Postal code').fill('45999');
+    expect(await page.locator('#shipping-country').inputValue()).toBe('US');
     await page.locator('#card-number').fill('4242 4242 4242 4242');
     await page.locator('#card-expiry').fill('12 / 34');
     await page.locator('#card-cvc').fill('123');
@@ -111,6 +118,8 @@ describe('checkout in the browser', () => {
       expect(await current.getAttribute('data-step')).toBe('paid');
     }
     expect(await page.getByTestId('order-total').innerText()).toBe(usd(cart.totalCents));
+    await page.getByText('7 Tannery Row').waitFor();
+    await page.getByText('Hollin Ford, OH 45999').waitFor();
     await shot('checkout-order.png');
 
     const order = ((await (await page.request.get(`${baseUrl}/api/orders/${orderId}`)).json()) as { order: OrderDto }).order;

@@ -157,9 +157,12 @@ export async function sessionOf(orderId: string): Promise<string> {
   return o.checkoutSessionId;
 }
 
-/** Pays the order's session with a test card and waits until the webhooks are delivered. */
+/** An invented shipping address, as a buyer types it on the payment page. */
+export const TEST_SHIP_TO = { name: 'Ada Fenner', line1: '7 Tannery Row', city: 'Hollin Ford', state: 'OH', postal_code: '45999' };
+
+/** Pays the order's session with a test card (and the test address when it ships) and waits for the webhooks. */
 export async function payOrder(h: PaymentsHarness, orderId: string) {
-  const outcome = h.fake.pay(await sessionOf(orderId), { number: '4242424242424242', expiry: '12/40', cvc: '123' });
+  const outcome = h.fake.pay(await sessionOf(orderId), { number: '4242424242424242', expiry: '12/40', cvc: '123', shipping: TEST_SHIP_TO });
   if (outcome.kind !== 'paid') throw new Error(`payment did not go through: ${outcome.kind}`);
   await h.fake.waitForDeliveries(15_000);
   return outcome;

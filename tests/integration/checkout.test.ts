@@ -19,6 +19,7 @@ import {
   payOrder,
   sessionOf,
   startPaymentsHarness,
+  TEST_SHIP_TO,
   type PaymentsHarness,
 } from '../factories/orders';
 import { createUser, ORIGIN, signIn } from '../factories/users';
@@ -85,6 +86,49 @@ describe('checkout', () => {
     expect((await listingRow(bolts.id)).quantity).toBe(7);
     expect((await listingRow(housing.id)).quantity).toBe(0);
     expect((await reservations(order.id)).map((x) => x.state)).toEqual(['held', 'held']);
+  });
+
+  it('when the order ships, then the payment page asks for an address in that country only; once paid, the buyer and the seller see it', async () => {
+    const shop = await createShop({});
+    const other = await createShop({});
+    const listing = await createLiveListing(shop.user.id, { quantity: 3, priceCents: 2_500 });
+    const { agent } = await buyer(h.app);
+    await addToCart(agent, listing.id, 1);
+    const r = await checkout(agent, { country: 'CA' });
+    expect(r.status).toBe(201);
+    const session = await stripe.checkout.sessions.retrieve(await sessionOf(r.body.orderId));
+    expect(session.shipping_address_collection).toEqual({ allowed_countries: ['CA'] });
+
+    // The page refuses a missing street or another country before any charge.
+    const sessionId = await sessionOf(r.body.orderId);
+    const card = { number: '4242424242424242', expiry: '12/40', cvc: '123' };
+    expect(h.fake.pay(sessionId, { ...card, shipping: { ...TEST_SHIP_TO, line1: '' } })).toMatchObject({ kind: 'rejected', error: { message: 'Enter the street address.' } });
+    expect(h.fake.pay(sessionId, { ...card, shipping: { ...TEST_SHIP_TO, country: 'US' } })).toMatchObject({ kind: 'rejected' });
+    await payOrder(h, r.body.orderId);
+
+    const shipTo = { name: TEST_SHIP_TO.name, line1: TEST_SHIP_TO.line1, line2: null, city: TEST_SHIP_TO.city, state: TEST_SHIP_TO.state, postalCode: TEST_SHIP_TO.postal_code, country: 'CA' };
+    const order = await eventually(() => agent.get(`/api/orders/${r.body.orderId}`), (x) => x.body.order?.state === 'paid');
+    expect(order.body.order.shipTo).toEqual(shipTo);
+    const sub = order.body.order.subOrders[0];
+    const seller = await signIn(h.app, shop.user);
+    expect((await seller.get(`/api/seller/orders/${sub.id}`)).body.subOrder.shipTo).toEqual(shipTo);
+    // Another seller cannot read it.
+    expect((await (await signIn(h.app, other.user)).get(`/api/seller/orders/${sub.id}`)).status).toBe(404);
+  });
+
+  it('when the buyer picks the parts up, then no address is asked for', async () => {
+    const shop = await createShop({});
+    await getDb().update(sellerProfiles).set({ pickupAtShows: true }).where(eq(sellerProfiles.userId, shop.user.id));
+    const listing = await createLiveListing(shop.user.id, { quantity: 3, priceCents: 2_500 });
+    const { agent } = await buyer(h.app);
+    await addToCart(agent, listing.id, 1);
+    const r = await checkout(agent, { pickup: true });
+    expect(r.status, JSON.stringify(r.body)).toBe(201);
+    const session = await stripe.checkout.sessions.retrieve(await sessionOf(r.body.orderId));
+    expect(session.shipping_address_collection).toBeNull();
+    await payOrder(h, r.body.orderId);
+    const order = await eventually(() => agent.get(`/api/orders/${r.body.orderId}`), (x) => x.body.order?.state === 'paid');
+    expect(order.body.order.shipTo).toBeNull();
   });
 
   it('when the session is paid, then the order is paid, the stock committed, the cart emptied, transfers made in the group and mails sent', async () => {
@@ -206,7 +250,7 @@ describe('checkout', () => {
     await addToCart(agent, listing.id, 1);
     const r = await checkout(agent);
     h.fake.pauseDeliveries();
-    h.fake.pay(await sessionOf(r.body.orderId), { number: '4242424242424242', expiry: '12/40', cvc: '123' });
+    h.fake.pay(await sessionOf(r.body.orderId), { number: '4242424242424242', expiry: '12/40', cvc: '123', shipping: TEST_SHIP_TO });
     await endHold(r.body.orderId);
     const swept = await releaseExpiredReservations(new Date());
     expect(swept.paid).toBeGreaterThanOrEqual(1);

@@ -10,7 +10,7 @@ import { resetStripeClient } from '../../server/services/stripe-client';
 import { freePort, startAppProcess, stopAllApps, type AppProcess } from '../faults/app-process';
 import { startHttpGate, type HttpGate } from '../faults/http-gate';
 import { startTcpProxy, type TcpProxy } from '../faults/tcp-proxy';
-import { createLiveListing, createShop, eventually, listingRow } from '../factories/orders';
+import { createLiveListing, createShop, eventually, listingRow, TEST_SHIP_TO } from '../factories/orders';
 import { createUser, ORIGIN } from '../factories/users';
 
 /*
@@ -131,7 +131,7 @@ describe('the app killed in the middle of checkouts', () => {
     expect(wave1.map((r) => r.status)).toEqual([201, 201, 201, 201]);
     for (const r of wave1.slice(0, 2)) {
       const [o] = await getDb().select().from(orders).where(eq(orders.id, r.body.orderId));
-      expect(fake.pay(o.checkoutSessionId!, { number: '4242424242424242', expiry: '12/40', cvc: '123' }).kind).toBe('paid');
+      expect(fake.pay(o.checkoutSessionId!, { number: '4242424242424242', expiry: '12/40', cvc: '123', shipping: TEST_SHIP_TO }).kind).toBe('paid');
     }
     await fake.waitForDeliveries(15_000);
     const paidIds = wave1.slice(0, 2).map((r) => r.body.orderId as string);
@@ -285,7 +285,7 @@ describe('webhook deliveries that fail', () => {
       }
       return { kind: 'forward' };
     });
-    expect(fake.pay(o.checkoutSessionId!, { number: '4242424242424242', expiry: '12/40', cvc: '123' }).kind).toBe('paid');
+    expect(fake.pay(o.checkoutSessionId!, { number: '4242424242424242', expiry: '12/40', cvc: '123', shipping: TEST_SHIP_TO }).kind).toBe('paid');
     await fake.waitForDeliveries(20_000);
     const d = deliveryOf(await completedEventId(o.checkoutSessionId!));
     expect(failures).toBe(2);
@@ -309,7 +309,7 @@ describe('webhook deliveries that fail', () => {
     const [o] = await getDb().select().from(orders).where(eq(orders.id, co.body.orderId));
 
     await app.kill();
-    expect(fake.pay(o.checkoutSessionId!, { number: '4242424242424242', expiry: '12/40', cvc: '123' }).kind).toBe('paid');
+    expect(fake.pay(o.checkoutSessionId!, { number: '4242424242424242', expiry: '12/40', cvc: '123', shipping: TEST_SHIP_TO }).kind).toBe('paid');
     const eventId = await completedEventId(o.checkoutSessionId!);
     // The first attempts fail (nothing listens; the gate answers 502), then the app comes back.
     await eventually(async () => deliveryOf(eventId), (x) => (x?.attempts.length ?? 0) >= 2, 10_000);

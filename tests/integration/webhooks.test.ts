@@ -16,6 +16,7 @@ import {
   payOrder,
   sessionOf,
   startPaymentsHarness,
+  TEST_SHIP_TO,
   type PaymentsHarness,
 } from '../factories/orders';
 
@@ -153,7 +154,7 @@ describe('replays and out-of-order deliveries', () => {
   it('when the refund event comes before the payment event, then it is refused for a retry and the totals end up right', async () => {
     const { orderId, sessionId } = await pendingOrder();
     h.fake.pauseDeliveries();
-    const paid = h.fake.pay(sessionId, { number: '4242424242424242', expiry: '12/40', cvc: '123' });
+    const paid = h.fake.pay(sessionId, { number: '4242424242424242', expiry: '12/40', cvc: '123', shipping: TEST_SHIP_TO });
     if (paid.kind !== 'paid') throw new Error('payment failed');
     await stripe.refunds.create({ payment_intent: paid.paymentIntent.id, amount: 500 });
     const refundedEvent = (await stripe.events.list({ type: 'charge.refunded', limit: 5 })).data.find((e) => (e.data.object as Stripe.Charge).payment_intent === paid.paymentIntent.id);

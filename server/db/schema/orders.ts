@@ -51,6 +51,8 @@ export const orders = pgTable(
     totalCents: integer('total_cents').notNull(),
     refundedCents: integer('refunded_cents').notNull().default(0),
     destination: jsonb('destination').notNull(),
+    /** The shipping address collected on the payment page (shared/schemas/orders.ts ShipTo); null for pickup. */
+    shipTo: jsonb('ship_to'),
     expiresAt: ts('expires_at').notNull(),
     paidAt: ts('paid_at'),
     createdAt: createdAt(),

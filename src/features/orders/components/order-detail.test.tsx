@@ -35,6 +35,7 @@ function order(overrides: Partial<OrderDto> = {}): OrderDto {
     totalCents: 11150,
     refundedCents: 0,
     destination: { country: 'US' },
+    shipTo: { name: 'Wren Halloway', line1: '14 Quarry Lane', line2: null, city: 'Marrow Bend', state: 'OH', postalCode: '45999', country: 'US' },
     createdAt: '2026-03-01T09:00:00Z',
     paidAt: '2026-03-01T09:02:00Z',
     expiresAt: '2026-03-01T09:35:00Z',
@@ -77,6 +78,17 @@ describe('order state display', () => {
     expect(screen.getByText('Partly refunded')).toBeInTheDocument();
     expect(screen.getByTestId('order-total')).toHaveTextContent('$111.50');
     expect(screen.getByText(/Arrived cracked/)).toBeInTheDocument();
+  });
+
+  it('when the order ships, then the address given on the payment page shows; for pickup it does not', () => {
+    mockApi({});
+    const { unmount } = renderWithProviders(<OrderDetail order={order()} />);
+    expect(screen.getByText('14 Quarry Lane')).toBeInTheDocument();
+    expect(screen.getByText('Marrow Bend, OH 45999')).toBeInTheDocument();
+    unmount();
+    renderWithProviders(<OrderDetail order={order({ destination: { pickup: true }, shipTo: null })} />);
+    expect(screen.queryByText('14 Quarry Lane')).toBeNull();
+    expect(screen.getByText(/Pickup from each seller/)).toBeInTheDocument();
   });
 
   it('when back from the payment page before the payment is recorded, then it says it is confirming, and thanks once it is paid', async () => {

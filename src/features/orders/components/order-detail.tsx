@@ -4,6 +4,7 @@ import type { OrderDto, SubOrderDto } from '@shared/schemas/orders';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FormAlert, Notice } from '@/components/ui/notice';
+import { PostalAddress } from '@/components/ui/postal-address';
 import { textLinkClasses } from '@/components/ui/text-link';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
@@ -166,9 +167,19 @@ export function OrderDetail({ order, awaitingPayment = false }: { order: OrderDt
             </div>
           ) : null}
         </dl>
-        <p className="flex items-center gap-2 text-sm text-ink-soft">
-          <MapPin aria-hidden="true" className="size-4 text-drab-700" /> {destinationText(order)}
-        </p>
+        {order.shipTo && !('pickup' in order.destination) ? (
+          <div className="flex gap-2 text-sm">
+            <MapPin aria-hidden="true" className="mt-0.5 size-4 shrink-0 text-drab-700" />
+            <div>
+              <p className="text-label text-ink-muted uppercase">Shipping to</p>
+              <PostalAddress address={order.shipTo} />
+            </div>
+          </div>
+        ) : (
+          <p className="flex items-center gap-2 text-sm text-ink-soft">
+            <MapPin aria-hidden="true" className="size-4 text-drab-700" /> {destinationText(order)}
+          </p>
+        )}
         <p className="text-xs text-ink-muted">
           Placed {formatDate(order.createdAt)}
           {order.paidAt ? ` · paid ${formatDate(order.paidAt)}` : ''}

@@ -43,6 +43,7 @@ const order: OrderDto = {
   totalCents: 12950,
   refundedCents: 0,
   destination: { country: 'US' },
+  shipTo: null,
   createdAt: '2026-03-01T09:00:00Z',
   paidAt: '2026-03-01T09:02:00Z',
   expiresAt: '2026-03-01T09:35:00Z',

@@ -24,6 +24,7 @@ function subOrder(overrides: Partial<SellerSubOrderDto> = {}): SellerSubOrderDto
     lines: [{ id: 'l1', listingId: 'x', title: 'Wheel cylinder, rear, 7/8 in', quantity: 2, refundedQuantity: 0, unitPriceCents: 3100, lineCents: 6200 }],
     buyer: { name: 'Wren Halloway', email: 'wren.halloway@example.test' },
     destination: { country: 'US' },
+    shipTo: { name: 'Wren Halloway', line1: '14 Quarry Lane', line2: null, city: 'Marrow Bend', state: 'OH', postalCode: '45999', country: 'US' },
     feeCents: 568,
     shareCents: 6532,
     paidAt: '2026-03-01T09:02:00Z',
@@ -46,6 +47,14 @@ describe('seller order detail', () => {
     await user.click(screen.getByRole('button', { name: 'Mark as shipped' }));
 
     await waitFor(() => expect(calls.find((c) => c.path.endsWith('/ship'))?.body).toEqual({ carrier: 'UPS', tracking: '1Z999AA10123456784' }));
+  });
+
+  it('when the buyer gave a shipping address, then the seller sees it to write the label', () => {
+    mockApi({});
+    renderWithProviders(<SellerOrderDetail subOrder={subOrder()} />);
+    expect(screen.getByText('Ship to')).toBeInTheDocument();
+    expect(screen.getByText('14 Quarry Lane')).toBeInTheDocument();
+    expect(screen.getByText('Marrow Bend, OH 45999')).toBeInTheDocument();
   });
 
   it('when the tracking number has odd characters, then the shared schema stops it before sending', async () => {

@@ -4,6 +4,7 @@ import type { SellerSubOrderDto } from '@shared/schemas/orders';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FormAlert, Notice } from '@/components/ui/notice';
+import { PostalAddress } from '@/components/ui/postal-address';
 import { formatDate } from '@/lib/format';
 import { useDeliverSubOrder } from '../api/ship-sub-order';
 import { formatCents } from '@/lib/money';
@@ -100,9 +101,19 @@ export function SellerOrderDetail({ subOrder }: { subOrder: SellerSubOrderDto })
             <User aria-hidden="true" className="size-4 text-drab-700" /> {subOrder.buyer.name}
           </p>
           <p className="text-sm text-ink-soft">{subOrder.buyer.email}</p>
-          <p className="flex items-center gap-2 text-sm text-ink-soft">
-            <MapPin aria-hidden="true" className="size-4 text-drab-700" /> {dest}
-          </p>
+          {subOrder.shipTo && !subOrder.pickup ? (
+            <div className="flex gap-2 text-sm">
+              <MapPin aria-hidden="true" className="mt-0.5 size-4 shrink-0 text-drab-700" />
+              <div>
+                <p className="text-label text-ink-muted uppercase">Ship to</p>
+                <PostalAddress address={subOrder.shipTo} />
+              </div>
+            </div>
+          ) : (
+            <p className="flex items-center gap-2 text-sm text-ink-soft">
+              <MapPin aria-hidden="true" className="size-4 text-drab-700" /> {dest}
+            </p>
+          )}
           {subOrder.paidAt ? <p className="text-xs text-ink-muted">Paid {formatDate(subOrder.paidAt)}</p> : null}
         </Card>
         <Card className="space-y-3">
