@@ -71,7 +71,7 @@ export const retrieveBalanceTransaction: ApiHandler = ({ state, params, path }) 
 };
 
 export const listBalanceTransactions: ApiHandler = ({ state, params }) => {
-  const p = checkParams(params, { ...LIST_PARAMS, source: str(), type: oneOf(['charge', 'refund', 'transfer']), currency: str() }) as {
+  const p = checkParams(params, { ...LIST_PARAMS, source: str(), type: oneOf(['charge', 'refund', 'transfer', 'transfer_refund']), currency: str() }) as {
     source?: string;
     type?: string;
     currency?: string;

@@ -7,7 +7,7 @@ import { isCurrencyCode, stripeAmountText } from './money';
 import { bool, checkParams, createMetadata, EXPAND, int, LIST_PARAMS, mergeMetadata, metadata, obj, oneOf, str, url } from './params';
 import type { FakeState } from './state';
 import { StripeFakeError } from './stripe-error';
-import type { Account, AccountLink, Metadata, Requirements, Transfer } from './types';
+import type { Account, AccountLink, Metadata, Requirements, Transfer, TransferReversal } from './types';
 
 // What onboarding would ask an individual seller for; cleared once onboarding is done.
 const ONBOARDING_DUE = ['business_profile.url', 'business_type', 'external_account', 'tos_acceptance.date', 'tos_acceptance.ip'];
@@ -305,4 +305,49 @@ export const listTransfers: ApiHandler = ({ state, params }) => {
     (t) => (p.transfer_group === undefined || t.transfer_group === p.transfer_group) && (p.destination === undefined || t.destination === p.destination),
   );
   return render(state, paginate(items, p, '/v1/transfers', 'transfer'), p.expand);
+};
+
+/**
+ * Takes money back from the connected account out of a transfer (all that is left when no amount is given).
+ * The platform's balance grows by it; `transfer.reversed` fires, as Stripe fires it for partial reversals too.
+ */
+export const createTransferReversal: ApiHandler = ({ state, params, path }) => {
+  const transfer = mustFind(state.transfers, path.id, 'transfer');
+  const p = checkParams(params, { amount: int({ min: 1 }), description: str(), metadata: metadata(), refund_application_fee: bool(), expand: EXPAND }) as {
+    amount?: number;
+    metadata?: Metadata;
+    expand?: string[];
+  };
+  const left = transfer.amount - transfer.amount_reversed;
+  const amount = p.amount ?? left;
+  if (left === 0) throw StripeFakeError.invalidRequest(`Transfer ${transfer.id} has already been fully reversed.`, { param: 'amount' });
+  if (amount > left) {
+    throw StripeFakeError.invalidParam('amount', `Reversal amount (${stripeAmountText(amount, transfer.currency)}) exceeds what is left of transfer ${transfer.id} (${stripeAmountText(left, transfer.currency)}).`);
+  }
+  const id = newId('trr');
+  const txn = addBalanceTransaction(state, { amount, currency: transfer.currency, type: 'transfer_refund', source: id, description: `Reversal of ${transfer.id}` });
+  const reversal: TransferReversal = {
+    id,
+    object: 'transfer_reversal',
+    amount,
+    balance_transaction: txn.id,
+    created: nowSeconds(),
+    currency: transfer.currency,
+    destination_payment_refund: newId('pyr'),
+    metadata: createMetadata(p.metadata),
+    source_refund: null,
+    transfer: transfer.id,
+  };
+  transfer.amount_reversed += amount;
+  transfer.reversed = transfer.amount_reversed === transfer.amount;
+  transfer.reversals.data.unshift(reversal);
+  transfer.reversals.total_count = transfer.reversals.data.length;
+  state.emit('transfer.reversed', transfer);
+  return render(state, reversal, p.expand);
+};
+
+export const listTransferReversals: ApiHandler = ({ state, params, path }) => {
+  const transfer = mustFind(state.transfers, path.id, 'transfer');
+  const p = checkParams(params, { ...LIST_PARAMS }) as { expand?: string[] };
+  return render(state, paginate([...transfer.reversals.data].reverse(), p, `/v1/transfers/${transfer.id}/reversals`, 'transfer reversal'), p.expand);
 };

@@ -7,7 +7,7 @@ import {
   listSessionLineItems,
   retrieveCheckoutSession,
 } from './checkout';
-import { createAccount, createAccountLink, createTransfer, listAccounts, listTransfers, retrieveAccount, retrieveTransfer, updateAccount } from './connect';
+import { createAccount, createAccountLink, createTransfer, createTransferReversal, listAccounts, listTransferReversals, listTransfers, retrieveAccount, retrieveTransfer, updateAccount } from './connect';
 import type { ApiHandler } from './context';
 import { createCustomer, listCustomers, retrieveCustomer, updateCustomer } from './customers';
 import { listEvents, retrieveEvent } from './events';
@@ -57,6 +57,8 @@ export const API_ROUTES: readonly Route[] = [
   route('POST', '/v1/transfers', createTransfer),
   route('GET', '/v1/transfers', listTransfers),
   route('GET', '/v1/transfers/:id', retrieveTransfer),
+  route('POST', '/v1/transfers/:id/reversals', createTransferReversal),
+  route('GET', '/v1/transfers/:id/reversals', listTransferReversals),
 
   route('GET', '/v1/balance', retrieveBalance),
   route('GET', '/v1/balance_transactions', listBalanceTransactions),

@@ -333,6 +333,17 @@ describe('connected accounts and transfers', () => {
     expect(byGroup.data.map((t) => t.id)).toEqual([transfer.id]);
     expect((await stripe.transfers.list({ transfer_group: 'other' })).data).toEqual([]);
     await receiver.waitFor((hooks) => hooks.some((h) => h.rawBody.includes('"transfer.created"')));
+
+    // Reversals take money back, in parts, never more than is left.
+    const part = await stripe.transfers.createReversal(transfer.id, { amount: 3000, metadata: { reason: 'refund' } });
+    expect(part).toMatchObject({ object: 'transfer_reversal', amount: 3000, transfer: transfer.id, currency: 'usd' });
+    await expect(stripe.transfers.createReversal(transfer.id, { amount: 5001 })).rejects.toMatchObject({ statusCode: 400, param: 'amount' });
+    const rest = await stripe.transfers.createReversal(transfer.id);
+    expect(rest.amount).toBe(5000);
+    expect(await stripe.transfers.retrieve(transfer.id)).toMatchObject({ amount_reversed: 8000, reversed: true });
+    expect((await stripe.transfers.listReversals(transfer.id)).data.map((x) => x.amount)).toEqual([5000, 3000]);
+    await expect(stripe.transfers.createReversal(transfer.id, { amount: 1 })).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);
+    await receiver.waitFor((hooks) => hooks.some((h) => h.rawBody.includes('"transfer.reversed"')));
   });
 
   it('when an account link was already used, then visiting it again sends the seller to refresh_url', async () => {

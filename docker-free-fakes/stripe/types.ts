@@ -318,11 +318,25 @@ export interface Transfer {
   destination_payment: string;
   livemode: false;
   metadata: Metadata;
-  reversals: { object: 'list'; data: never[]; has_more: false; total_count: 0; url: string };
+  reversals: { object: 'list'; data: TransferReversal[]; has_more: false; total_count: number; url: string };
   reversed: boolean;
   source_transaction: string | null;
   source_type: 'card';
   transfer_group: string | null;
+}
+
+/** Money taken back from a connected account out of a transfer (POST /v1/transfers/:id/reversals). */
+export interface TransferReversal {
+  id: string;
+  object: 'transfer_reversal';
+  amount: number;
+  balance_transaction: string;
+  created: number;
+  currency: string;
+  destination_payment_refund: string;
+  metadata: Metadata;
+  source_refund: null;
+  transfer: string;
 }
 
 export interface BalanceTransaction {
@@ -340,7 +354,7 @@ export interface BalanceTransaction {
   reporting_category: string;
   source: string;
   status: 'available';
-  type: 'charge' | 'refund' | 'transfer';
+  type: 'charge' | 'refund' | 'transfer' | 'transfer_refund';
 }
 
 export interface StripeEvent {

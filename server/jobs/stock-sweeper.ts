@@ -4,7 +4,7 @@ import { getDb } from '../db/client';
 import { orders } from '../db/schema/index';
 import { logger } from '../lib/logger';
 import { closePendingOrder, expireStripeSession } from '../services/checkout';
-import { payPendingTransfers } from '../services/payouts';
+import { payPendingTransfers, reverseOverpaidTransfers } from '../services/payouts';
 import { processCompletedSession } from '../services/stripe-webhooks';
 
 /*
@@ -72,6 +72,7 @@ export function startStockSweeper(intervalMs: number): StockSweeper {
         const r = await releaseExpiredReservations();
         if (r.expired || r.paid) logger.info(r, 'stock sweeper: expired checkouts');
         await payPendingTransfers({ all: true });
+        await reverseOverpaidTransfers({ all: true });
       } catch (err) {
         logger.error({ err }, 'stock sweeper failed; will try again');
       } finally {

@@ -13,6 +13,7 @@ import { composeMail, sendMail } from '../lib/mailer';
 import { feeReturnedOnRefund } from './statements';
 import { restockUnits } from './stock';
 import { getStripe, stripeErrorInfo } from './stripe-client';
+import { reverseOverpaidTransfers } from './payouts';
 
 /*
  * Orders after checkout: what buyers and sellers see, shipping and delivery by the seller, refunds by an
@@ -337,12 +338,13 @@ export async function refundOrder(admin: SessionUser, orderId: string, input: Re
         await tx.update(orderLines).set({ refundedQuantity: sql`${orderLines.refundedQuantity} + ${l.quantity}` }).where(eq(orderLines.id, l.lineId));
         if (input.restock) await restockUnits(tx, l.listingId, l.quantity);
       }
-      // Money not yet sent to the seller shrinks by what the seller gives back (the refund less the fee we return).
+      // What the seller is owed shrinks by what the seller gives back (the refund less the fee we return): money
+      // not yet sent is sent less, money already sent is taken back by a transfer reversal after commit.
       const sellerDebit = target.amountCents - feeReturnedOnRefund(sub.feeCents, subTotal, sub.refundedCents, refundedAfter);
       await tx
         .update(transfers)
         .set({ amountCents: sql`greatest(${transfers.amountCents} - ${sellerDebit}, 0)` })
-        .where(and(eq(transfers.subOrderId, sub.id), inArray(transfers.state, ['pending', 'waiting_for_onboarding'])));
+        .where(and(eq(transfers.subOrderId, sub.id), inArray(transfers.state, ['pending', 'waiting_for_onboarding', 'paid'])));
       const orderRefunded = locked.refundedCents + target.amountCents;
       await tx
         .update(orders)
@@ -352,6 +354,7 @@ export async function refundOrder(admin: SessionUser, orderId: string, input: Re
     });
     done.push({ subOrderId: target.subOrderId, amountCents: target.amountCents });
   }
+  await reverseOverpaidTransfers({ orderId }).catch((err: unknown) => logger.error({ err, orderId }, 'transfer reversals after a refund failed; the sweeper retries'));
   void sendRefundMails(orderId, done, input.reason);
   return getOrderFor(admin, orderId);
 }
@@ -461,7 +464,7 @@ export async function sendRefundMails(orderId: string, parts: Array<{ subOrderId
           to: s.email,
           subject: `Refund on a Drabyard sale: ${money(p.amountCents)}`,
           greeting: `Hello ${s.name},`,
-          paragraphs: [`${money(p.amountCents)} of your sale to ${order.buyerName} was refunded (${reason}). Your monthly statement shows it.`],
+          paragraphs: [`${money(p.amountCents)} of your sale to ${order.buyerName} was refunded (${reason}). What you give back (the refund less the platform fee we return) comes off your payout, or is taken back from your Stripe balance when the payout already went out. Your monthly statement shows it.`],
           action: { label: 'Open the order', url: `${origin}/seller/orders/${s.s.id}` },
         }),
       );

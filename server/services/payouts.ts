@@ -1,4 +1,4 @@
-import { and, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import type Stripe from 'stripe';
 import type { PayoutState } from '../../shared/schemas/orders';
 import type { SessionUser } from '../auth/require-role';
@@ -132,7 +132,7 @@ export async function payPendingTransfers(scope: { orderId: string } | { sellerI
         { idempotencyKey: `transfer-${t.id}` },
       );
       await db.transaction(async (tx) => {
-        await tx.update(transfers).set({ state: 'paid', stripeTransferId: tr.id }).where(eq(transfers.id, t.id));
+        await tx.update(transfers).set({ state: 'paid', stripeTransferId: tr.id, sentCents: t.amountCents }).where(eq(transfers.id, t.id));
         await tx.update(subOrders).set({ transferId: tr.id }).where(eq(subOrders.id, t.subOrderId));
       });
       paid += 1;
@@ -151,6 +151,45 @@ export async function payPendingTransfers(scope: { orderId: string } | { sellerI
     }
   }
   return paid;
+}
+
+/**
+ * Takes back from sellers' accounts what refunds made after their transfer went out: a paid transfer that sent
+ * more than the seller is now owed (`amount_cents`, lowered by each refund) is reversed by the difference.
+ * Stripe's own record of the transfer is the truth (re-read first), and the idempotency key names the transfer
+ * and what Stripe had reversed before, so a retry after a lost answer repeats the same step and a later refund
+ * makes a new one. Failures stay due for the next call (the sweeper calls it too).
+ */
+export async function reverseOverpaidTransfers(scope: { orderId: string } | { all: true }): Promise<number> {
+  const db = getDb();
+  const where = [eq(transfers.state, 'paid'), isNotNull(transfers.stripeTransferId), sql`${transfers.sentCents} - ${transfers.reversedCents} > ${transfers.amountCents}`];
+  if ('orderId' in scope) where.push(eq(subOrders.orderId, scope.orderId));
+  const due = await db
+    .select({ id: transfers.id, stripeTransferId: transfers.stripeTransferId, amountCents: transfers.amountCents, orderId: subOrders.orderId, subOrderId: transfers.subOrderId })
+    .from(transfers)
+    .innerJoin(subOrders, eq(subOrders.id, transfers.subOrderId))
+    .where(and(...where))
+    .limit(200);
+  let reversed = 0;
+  for (const t of due) {
+    const stripeId = t.stripeTransferId as string;
+    try {
+      const at = await getStripe().transfers.retrieve(stripeId);
+      const owed = at.amount - at.amount_reversed - t.amountCents;
+      if (owed > 0) {
+        await getStripe().transfers.createReversal(
+          stripeId,
+          { amount: owed, metadata: { orderId: t.orderId, subOrderId: t.subOrderId } },
+          { idempotencyKey: `reversal-${t.id}-${at.amount_reversed}` },
+        );
+        reversed += 1;
+      }
+      await db.update(transfers).set({ sentCents: at.amount, reversedCents: at.amount_reversed + Math.max(owed, 0) }).where(eq(transfers.id, t.id));
+    } catch (err) {
+      logger.warn({ err: stripeErrorInfo(err) ?? err, transferId: t.id }, 'taking a refund back from the seller failed; it stays due');
+    }
+  }
+  return reversed;
 }
 
 async function sellerProfileOf(userId: string) {

@@ -2,7 +2,8 @@ import { eq } from 'drizzle-orm';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getDb } from '../../server/db/client';
-import { orderLines, subOrders, transfers } from '../../server/db/schema/index';
+import { orderLines, sellerProfiles, subOrders, transfers } from '../../server/db/schema/index';
+import { reverseOverpaidTransfers } from '../../server/services/payouts';
 import { waitForMail } from '../factories/mail';
 import {
   addToCart,
@@ -89,6 +90,44 @@ describe('refunds', () => {
     expect(o.subB.feeCents).toBe(400);
     expect(after.amountCents).toBe(before.amountCents - (1200 - 77));
     expect((await listingRow(o.lb.id)).quantity).toBe(0);
+  });
+
+  it('when a refund comes after the seller was paid, then what the seller gives back is taken back from the transfer, once', async () => {
+    const shop = await createShop({});
+    const acct = await stripe.accounts.create({ type: 'express', email: shop.user.email });
+    await fetch(`${h.fake.url}/__control/accounts/${acct.id}/onboard`, { method: 'POST' });
+    await h.fake.waitForDeliveries();
+    await getDb().update(sellerProfiles).set({ stripeAccountId: acct.id, payoutsEnabled: true }).where(eq(sellerProfiles.userId, shop.user.id));
+    const listing = await createLiveListing(shop.user.id, { quantity: 1, priceCents: 5000 });
+    const customer = await buyer(h.app);
+    await addToCart(customer.agent, listing.id, 1);
+    const r = await checkout(customer.agent);
+    await payOrder(h, r.body.orderId);
+    const [sub] = await getDb().select().from(subOrders).where(eq(subOrders.orderId, r.body.orderId));
+    const transferOf = async () => (await getDb().select().from(transfers).where(eq(transfers.subOrderId, sub.id)))[0];
+    const paid = await eventually(transferOf, (t) => t?.state === 'paid');
+    expect(paid.sentCents).toBe(paid.amountCents);
+    const stripeId = paid.stripeTransferId as string;
+
+    // 12.00 of a 62.00 sale: the seller gives back 12.00 less the 0.77 of fee returned (as above).
+    expect((await refund(r.body.orderId, { subOrderId: sub.id, amountCents: 1200, restock: false, reason: 'Shipping overcharged' })).status).toBe(200);
+    let at = await stripe.transfers.retrieve(stripeId);
+    expect(at.amount_reversed).toBe(1200 - 77);
+    expect(await transferOf()).toMatchObject({ amountCents: paid.sentCents - 1123, reversedCents: 1123, sentCents: paid.sentCents });
+
+    // A reversal that fails stays due and goes through on the next sweep.
+    await getDb().update(transfers).set({ stripeTransferId: 'tr_missing_at_stripe' }).where(eq(transfers.subOrderId, sub.id));
+    expect((await refund(r.body.orderId, { restock: false, reason: 'Arrived broken' })).status).toBe(200);
+    expect((await transferOf()).reversedCents).toBe(1123);
+    await getDb().update(transfers).set({ stripeTransferId: stripeId }).where(eq(transfers.subOrderId, sub.id));
+    expect(await reverseOverpaidTransfers({ all: true })).toBeGreaterThanOrEqual(1);
+    at = await stripe.transfers.retrieve(stripeId);
+    // Everything refunded: the whole fee came back, so the seller keeps nothing and the transfer is reversed in full.
+    expect(at).toMatchObject({ amount_reversed: paid.sentCents, reversed: true });
+    expect(await transferOf()).toMatchObject({ amountCents: 0, reversedCents: paid.sentCents });
+    // Nothing more is due: running again changes nothing at Stripe.
+    await reverseOverpaidTransfers({ orderId: r.body.orderId });
+    expect((await stripe.transfers.listReversals(stripeId)).data.map((x) => x.amount).sort((x, y) => x - y)).toEqual([1123, paid.sentCents - 1123].sort((x, y) => x - y));
   });
 
   it('when the whole order is refunded with restock, then every seller part is refunded at Stripe and the order is refunded', async () => {

@@ -152,7 +152,12 @@ export const transfers = pgTable(
     subOrderId: uuid('sub_order_id').notNull().references(() => subOrders.id),
     sellerId: uuid('seller_id').notNull().references(() => users.id),
     stripeTransferId: text('stripe_transfer_id'),
+    /** What the seller is owed for the sub-order, net of refunds so far. */
     amountCents: integer('amount_cents').notNull(),
+    /** What went to the seller's account at Stripe (set when paid). */
+    sentCents: integer('sent_cents').notNull().default(0),
+    /** What was taken back from it at Stripe (transfer reversals) after refunds made once it was paid. */
+    reversedCents: integer('reversed_cents').notNull().default(0),
     state: text('state', { enum: ['pending', 'paid', 'waiting_for_onboarding', 'failed'] }).notNull().default('pending'),
     createdAt: createdAt(),
   },
