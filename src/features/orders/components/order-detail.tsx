@@ -168,13 +168,7 @@ export function OrderDetail({ order, awaitingPayment = false }: { order: OrderDt
           ) : null}
         </dl>
         {order.shipTo && !('pickup' in order.destination) ? (
-          <div className="flex gap-2 text-sm">
-            <MapPin aria-hidden="true" className="mt-0.5 size-4 shrink-0 text-drab-700" />
-            <div>
-              <p className="text-label text-ink-muted uppercase">Shipping to</p>
-              <PostalAddress address={order.shipTo} />
-            </div>
-          </div>
+          <PostalAddress label="Shipping to" address={order.shipTo} />
         ) : (
           <p className="flex items-center gap-2 text-sm text-ink-soft">
             <MapPin aria-hidden="true" className="size-4 text-drab-700" /> {destinationText(order)}

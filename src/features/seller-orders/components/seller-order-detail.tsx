@@ -102,13 +102,7 @@ export function SellerOrderDetail({ subOrder }: { subOrder: SellerSubOrderDto })
           </p>
           <p className="text-sm text-ink-soft">{subOrder.buyer.email}</p>
           {subOrder.shipTo && !subOrder.pickup ? (
-            <div className="flex gap-2 text-sm">
-              <MapPin aria-hidden="true" className="mt-0.5 size-4 shrink-0 text-drab-700" />
-              <div>
-                <p className="text-label text-ink-muted uppercase">Ship to</p>
-                <PostalAddress address={subOrder.shipTo} />
-              </div>
-            </div>
+            <PostalAddress label="Ship to" address={subOrder.shipTo} />
           ) : (
             <p className="flex items-center gap-2 text-sm text-ink-soft">
               <MapPin aria-hidden="true" className="size-4 text-drab-700" /> {dest}
