@@ -1,12 +1,10 @@
 import { LoaderCircle, MapPin, PackageCheck, Store, Truck } from 'lucide-react';
-import { Link } from 'react-router-dom';
 import type { OrderDto, SubOrderDto } from '@shared/schemas/orders';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FormAlert, Notice } from '@/components/ui/notice';
+import { OrderLinesTable } from '@/components/orders/order-lines-table';
 import { PostalAddress } from '@/components/ui/postal-address';
-import { textLinkClasses } from '@/components/ui/text-link';
-import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
 import { hasRole } from '@/lib/authorization';
 import { formatDate } from '@/lib/format';
@@ -45,48 +43,29 @@ function SubOrderCard({ order, subOrder, isAdmin }: { order: OrderDto; subOrder:
             {subOrder.pickup ? 'Handed over' : 'Delivered'} {formatDate(subOrder.deliveredAt)}
           </p>
         ) : null}
-        <table className="w-full text-sm">
-          <caption className="sr-only">Items from {subOrder.seller.name}</caption>
-          <thead className="text-left text-label text-ink-muted uppercase">
-            <tr>
-              <th scope="col" className="pb-1.5 font-semibold">Item</th>
-              <th scope="col" className="pb-1.5 text-right font-semibold">Qty</th>
-              <th scope="col" className="pb-1.5 text-right font-semibold">Each</th>
-              <th scope="col" className="pb-1.5 text-right font-semibold">Amount</th>
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-rule border-y border-rule">
-            {subOrder.lines.map((l) => (
-              <tr key={l.id}>
-                <td className="py-2 pr-3">
-                  <Link to={paths.listing.getHref(l.listingId)} className={textLinkClasses}>
-                    {l.title}
-                  </Link>
-                  {l.refundedQuantity > 0 ? <span className="block text-xs text-danger">{l.refundedQuantity} refunded</span> : null}
-                </td>
-                <td className="py-2 text-right tabular-nums">{l.quantity}</td>
-                <td className="py-2 text-right tabular-nums">{formatCents(l.unitPriceCents)}</td>
-                <td className="py-2 text-right tabular-nums">{formatCents(l.lineCents)}</td>
-              </tr>
-            ))}
-          </tbody>
-          <tfoot className="text-ink-soft">
-            <tr>
-              <th scope="row" colSpan={3} className="pt-2 text-right font-normal">
-                {subOrder.pickup ? 'Pickup' : 'Shipping'}
-              </th>
-              <td className="pt-2 text-right tabular-nums">{formatCents(subOrder.shippingCents)}</td>
-            </tr>
-            {subOrder.refundedCents > 0 ? (
-              <tr className="text-danger">
-                <th scope="row" colSpan={3} className="text-right font-normal">
-                  Refunded
+        <OrderLinesTable
+          lines={subOrder.lines}
+          caption={`Items from ${subOrder.seller.name}`}
+          linkToListings
+          footer={
+            <>
+              <tr>
+                <th scope="row" colSpan={3} className="pt-2 text-right font-normal">
+                  {subOrder.pickup ? 'Pickup' : 'Shipping'}
                 </th>
-                <td className="text-right tabular-nums">−{formatCents(subOrder.refundedCents)}</td>
+                <td className="pt-2 text-right tabular-nums">{formatCents(subOrder.shippingCents)}</td>
               </tr>
-            ) : null}
-          </tfoot>
-        </table>
+              {subOrder.refundedCents > 0 ? (
+                <tr className="text-danger">
+                  <th scope="row" colSpan={3} className="text-right font-normal">
+                    Refunded
+                  </th>
+                  <td className="text-right tabular-nums">−{formatCents(subOrder.refundedCents)}</td>
+                </tr>
+              ) : null}
+            </>
+          }
+        />
         <p className="text-xs text-ink-muted">{subOrder.shippingExplanation}</p>
         {isAdmin && canRefund(order, subOrder) ? <RefundForm order={order} subOrder={subOrder} /> : null}
       </section>

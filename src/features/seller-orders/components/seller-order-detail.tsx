@@ -4,6 +4,7 @@ import type { SellerSubOrderDto } from '@shared/schemas/orders';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { FormAlert, Notice } from '@/components/ui/notice';
+import { OrderLinesTable } from '@/components/orders/order-lines-table';
 import { PostalAddress } from '@/components/ui/postal-address';
 import { formatDate } from '@/lib/format';
 import { useDeliverSubOrder } from '../api/ship-sub-order';
@@ -64,30 +65,7 @@ export function SellerOrderDetail({ subOrder }: { subOrder: SellerSubOrderDto })
         <NextStep subOrder={subOrder} />
         <Card className="space-y-3">
           <h2 className="text-lg font-semibold text-ink">Items</h2>
-          <table className="w-full text-sm">
-            <caption className="sr-only">Items in this order</caption>
-            <thead className="text-left text-label text-ink-muted uppercase">
-              <tr>
-                <th scope="col" className="pb-1.5">Item</th>
-                <th scope="col" className="pb-1.5 text-right">Qty</th>
-                <th scope="col" className="pb-1.5 text-right">Each</th>
-                <th scope="col" className="pb-1.5 text-right">Amount</th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-rule border-y border-rule">
-              {subOrder.lines.map((l) => (
-                <tr key={l.id}>
-                  <td className="py-2 pr-3">
-                    {l.title}
-                    {l.refundedQuantity > 0 ? <span className="block text-xs text-danger">{l.refundedQuantity} refunded</span> : null}
-                  </td>
-                  <td className="py-2 text-right tabular-nums">{l.quantity}</td>
-                  <td className="py-2 text-right tabular-nums">{formatCents(l.unitPriceCents)}</td>
-                  <td className="py-2 text-right tabular-nums">{formatCents(l.lineCents)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
+          <OrderLinesTable lines={subOrder.lines} caption="Items in this order" />
           <p className="text-xs text-ink-muted">Shipping charged: {subOrder.shippingExplanation}</p>
         </Card>
       </div>
