@@ -8,6 +8,7 @@ import { listingFlags, listingPhotos, listings, parts } from '../db/schema/index
 import { computeFlags, PHOTO_REUSE_MAX_DISTANCE, type ListingFlag } from '../domain/listing-flags';
 import { isHydraulicRubber } from '../domain/standards/part-specs';
 import type { Tx } from './listing-photos';
+import type { ListingFlag as FlagReply } from '../../shared/schemas/listing-replies';
 
 type ListingRow = typeof listings.$inferSelect;
 type PartRow = typeof parts.$inferSelect;
@@ -87,12 +88,7 @@ export async function refreshFlags(tx: Db | Tx, l: ListingRow): Promise<ListingF
   return flags;
 }
 
-export interface FlagDto {
-  code: string;
-  severity: 'block' | 'review';
-  message: string;
-  details: unknown;
-}
+export type FlagDto = FlagReply;
 
 export async function flagsOf(conn: Db | Tx, listingIds: string[]): Promise<Map<string, FlagDto[]>> {
   const out = new Map<string, FlagDto[]>();

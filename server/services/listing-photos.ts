@@ -13,6 +13,7 @@ import { logger } from '../lib/logger';
 import { createPhotoStorage } from '../lib/photos/create-photo-storage';
 import { MAX_FILES, processUpload, photoSizeNames, type PhotoErrorCode, type ProcessedPhoto } from '../lib/photos/pipeline';
 import { photoKey, type PhotoStorage } from '../lib/photos/storage';
+import type { ListingPhoto } from '../../shared/schemas/listing-replies';
 
 type PhotoRow = typeof listingPhotos.$inferSelect;
 export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
@@ -29,14 +30,7 @@ export function setPhotoStorage(s: PhotoStorage | undefined) {
   storage = s;
 }
 
-export interface PhotoDto {
-  id: string;
-  position: number;
-  width: number;
-  height: number;
-  placeholderColor: string;
-  urls: { thumb: string; medium: string; large: string };
-}
+export type PhotoDto = ListingPhoto;
 
 export function photoDto(p: PhotoRow): PhotoDto {
   const s = getPhotoStorage();

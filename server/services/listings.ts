@@ -34,6 +34,7 @@ import {
   type Tx,
   type UploadFile,
 } from './listing-photos';
+import type { Listing, PartSummary, SellerCard } from '../../shared/schemas/listing-replies';
 
 export type ListingRow = typeof listings.$inferSelect;
 type PartRow = typeof parts.$inferSelect;
@@ -355,45 +356,9 @@ export async function setPhotoOrder(user: SessionUser, id: string, photoIds: str
 
 // --- reading ----------------------------------------------------------------------------------------
 
-export interface PartSummary {
-  id: string;
-  name: string;
-  category: string;
-  safetyClass: string;
-  primaryNumber: string | null;
-}
-
-export interface ListingDto {
-  id: string;
-  state: ListingState;
-  sellerId: string;
-  partId: string | null;
-  part: PartSummary | null;
-  title: string;
-  condition: ListingRow['condition'];
-  conditionLabel: string;
-  usedGrade: ListingRow['usedGrade'];
-  rubberUse: ListingRow['rubberUse'];
-  makersMarks: boolean;
-  quantity: number;
-  priceCents: number;
-  currency: string;
-  weightGrams: number;
-  lengthMm: number;
-  widthMm: number;
-  heightMm: number;
-  shippingProfileId: string | null;
-  description: string;
-  descriptionFormat: 'plain' | 'markdown';
-  descriptionHtml: string;
-  photos: PhotoDto[];
-  submittedAt: string | null;
-  approvedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-  /** Only for the seller and administrators. */
-  flags?: FlagDto[];
-}
+export type { PartSummary };
+/** A listing as the API returns it (shared/schemas/listing-replies.ts). */
+export type ListingDto = Listing;
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
@@ -453,19 +418,7 @@ export async function toDto(row: ListingRow, opts: { withFlags?: boolean; conn?:
   return (await toDtos([row], opts))[0];
 }
 
-export interface SellerCard {
-  id: string;
-  displayName: string;
-  shopName: string;
-  location: string;
-  country: string;
-  shipsTo: string[];
-  pickupAtShows: boolean;
-  showsNote: string;
-  returnPolicy: string;
-  liveListings: number;
-  memberSince: string;
-}
+export type { SellerCard };
 
 export async function sellerCard(sellerId: string): Promise<SellerCard> {
   const db = getDb();

@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import { boolean, check, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 import { parts } from './catalog';
+import { usedGradeCodes } from '../../../shared/schemas/listings';
 import { createdAt, id, ts, updatedAt } from './columns';
 
 /** A seller's shop: shown on listings; the Stripe connected account is filled in at payout onboarding. */
@@ -46,7 +47,7 @@ export const listings = pgTable(
     partId: uuid('part_id').references(() => parts.id, { onDelete: 'set null' }),
     title: text('title').notNull(),
     condition: text('condition', { enum: listingConditions }).notNull(),
-    usedGrade: text('used_grade'),
+    usedGrade: text('used_grade', { enum: usedGradeCodes }),
     rubberUse: text('rubber_use', { enum: ['serviceable', 'display_only'] }),
     makersMarks: boolean('makers_marks').notNull().default(false),
     quantity: integer('quantity').notNull(),

@@ -1,82 +1,11 @@
-import type { ListingStateCode, listingConditionCodes, rubberUseCodes, usedGradeCodes } from '@shared/schemas/listings';
+import type { ListingCondition, PartSummary, RubberUse, SellerCard, UsedGrade, Listing } from '@shared/schemas/listing-replies';
 
 /*
- * Reply shapes of the listings API (server/services/listings.ts), as the client reads them. Types only: the
- * server is ours and its integration tests pin the shapes; the client does not re-validate every reply.
+ * Reply shapes of the listings API as the client reads them: the listing, its photos, flags, part summary and
+ * seller card are shared with the server (shared/schemas/listing-replies.ts); the page-level shapes follow.
  */
 
-export type ListingCondition = (typeof listingConditionCodes)[number];
-export type UsedGrade = (typeof usedGradeCodes)[number];
-export type RubberUse = (typeof rubberUseCodes)[number];
-
-export interface ListingPhoto {
-  id: string;
-  position: number;
-  width: number;
-  height: number;
-  placeholderColor: string;
-  urls: { thumb: string; medium: string; large: string };
-}
-
-export interface ListingFlag {
-  code: string;
-  severity: 'block' | 'review';
-  message: string;
-  details: unknown;
-}
-
-export interface PartSummary {
-  id: string;
-  name: string;
-  category: string;
-  safetyClass: string;
-  primaryNumber: string | null;
-}
-
-export interface Listing {
-  id: string;
-  state: ListingStateCode;
-  sellerId: string;
-  partId: string | null;
-  part: PartSummary | null;
-  title: string;
-  condition: ListingCondition;
-  conditionLabel: string;
-  usedGrade: UsedGrade | null;
-  rubberUse: RubberUse | null;
-  makersMarks: boolean;
-  quantity: number;
-  priceCents: number;
-  currency: string;
-  weightGrams: number;
-  lengthMm: number;
-  widthMm: number;
-  heightMm: number;
-  shippingProfileId: string | null;
-  description: string;
-  descriptionFormat: 'plain' | 'markdown';
-  descriptionHtml: string;
-  photos: ListingPhoto[];
-  submittedAt: string | null;
-  approvedAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-  flags?: ListingFlag[];
-}
-
-export interface SellerCard {
-  id: string;
-  displayName: string;
-  shopName: string;
-  location: string;
-  country: string;
-  shipsTo: string[];
-  pickupAtShows: boolean;
-  showsNote: string;
-  returnPolicy: string;
-  liveListings: number;
-  memberSince: string;
-}
+export type { Listing, ListingCondition, ListingFlag, ListingPhoto, PartSummary, RubberUse, SellerCard, UsedGrade } from '@shared/schemas/listing-replies';
 
 export interface PartNumberGroup {
   kind: string;

@@ -1,3 +1,4 @@
+import type { ShopFields } from '@shared/schemas/listing-replies';
 import type { ListingStateCode } from '@shared/schemas/listings';
 
 /*
@@ -29,14 +30,7 @@ export interface MyListingsReply {
   pageSize: number;
 }
 
-export interface Shop {
-  shopName: string;
-  location: string;
-  country: string;
-  shipsTo: string[];
-  pickupAtShows: boolean;
-  showsNote: string;
-  returnPolicy: string;
+export interface Shop extends ShopFields {
   payoutsEnabled: boolean;
   updatedAt: string;
 }
