@@ -1,11 +1,13 @@
 import cluster from 'node:cluster';
 import type { Server } from 'node:http';
 import { createApp } from './app';
+import { startCacheChannel } from './db/cache-channel';
 import { closeDb } from './db/client';
 import { env } from './env';
 import { startStockSweeper } from './jobs/stock-sweeper';
 import { startJobs, stopJobs } from './jobs/queue';
 import { logger } from './lib/logger';
+import { clearReadCaches, setCacheBroadcast } from './lib/read-cache';
 import { closeMailer } from './lib/mailer';
 
 const e = env();
@@ -21,10 +23,26 @@ function startBackground() {
   };
 }
 
+/** Catalog edits in any HTTP process clear the read caches of all of them (LISTEN/NOTIFY, server/db/cache-channel.ts). */
+function shareCacheClearing() {
+  const channel = startCacheChannel({ url: e.DATABASE_URL, onRemoteClear: () => clearReadCaches({ fromElsewhere: true }) }).then(
+    (c) => (setCacheBroadcast(() => c.notify()), c),
+    (err: unknown) => {
+      logger.warn({ err }, 'cache channel did not start; other processes see catalog edits when their cache entries expire');
+      return null;
+    },
+  );
+  return async () => {
+    setCacheBroadcast(null);
+    await (await channel)?.stop();
+  };
+}
+
 function serveHttp(onListening: () => void) {
   const server: Server = createApp(e).listen(e.PORT, e.HOST, onListening);
+  const stopChannel = shareCacheClearing();
   return (done: () => void) => {
-    server.close(() => done());
+    server.close(() => void stopChannel().finally(done));
     server.closeIdleConnections();
   };
 }

@@ -1,9 +1,10 @@
 import { LRUCache } from 'lru-cache';
+import { logger } from './logger';
 
 /**
  * Short-lived caches for public reads (catalog pages, number resolution, listing pages, searches). Catalog
- * edits clear them in this process; other app processes see changes within the TTL, which is short for that
- * reason.
+ * edits clear them in this process and tell the other app processes to clear theirs (server/db/cache-channel.ts,
+ * set up by server/index.ts); should a notice be lost, the short TTLs bound how stale an entry can get.
  *
  * Reads go through lru-cache's fetch(): concurrent misses of one key share a single load (no stampede when a
  * popular entry expires under load), and an expired entry is served while its fresh value loads.
@@ -48,6 +49,15 @@ export function readCache<T extends object>(opts: { max: number; ttlMs: number }
   };
 }
 
-export function clearReadCaches() {
+let tellOthers: (() => Promise<void>) | null = null;
+
+/** Sets how other processes are told that the caches were cleared here (null: nobody to tell). */
+export function setCacheBroadcast(fn: (() => Promise<void>) | null) {
+  tellOthers = fn;
+}
+
+/** Clears every read cache of this process and, unless the notice came from elsewhere, tells the others. */
+export function clearReadCaches(opts: { fromElsewhere?: boolean } = {}) {
   for (const c of caches) c.clear();
+  if (!opts.fromElsewhere && tellOthers) void tellOthers().catch((err: unknown) => logger.warn({ err }, 'could not tell the other processes to clear their caches'));
 }
