@@ -1,4 +1,4 @@
-import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type TextareaHTMLAttributes } from 'react';
+import { useId, type InputHTMLAttributes, type ReactNode, type Ref, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 import { cn } from '@/lib/cn';
 
 const controlClasses =
@@ -12,12 +12,14 @@ type FieldShellProps = {
   error?: string;
   children: ReactNode;
   className?: string;
+  /** Keeps the label for screen readers only (compact rows). */
+  hideLabel?: boolean;
 };
 
-function FieldShell({ id, label, hint, error, children, className }: FieldShellProps) {
+function FieldShell({ id, label, hint, error, children, className, hideLabel = false }: FieldShellProps) {
   return (
     <div className={className}>
-      <label htmlFor={id} className="mb-1.5 block text-sm font-semibold text-ink">
+      <label htmlFor={id} className={cn('mb-1.5 block text-sm font-semibold text-ink', hideLabel && 'sr-only')}>
         {label}
       </label>
       {children}
@@ -82,6 +84,33 @@ export function TextAreaField({ label, hint, error, className, ref, rows = 4, ..
         className={cn(controlClasses, 'py-2', error ? 'border-danger' : 'border-rule-strong')}
         {...props}
       />
+    </FieldShell>
+  );
+}
+
+export type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'id'> & {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+  ref?: Ref<HTMLSelectElement>;
+  hideLabel?: boolean;
+};
+
+/** A labelled native select in the look of the text fields. */
+export function SelectField({ label, hint, error, className, ref, hideLabel, children, ...props }: SelectFieldProps) {
+  const id = useId();
+  return (
+    <FieldShell id={id} label={label} hint={hint} error={error} className={className} hideLabel={hideLabel}>
+      <select
+        id={id}
+        ref={ref}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy(id, hint, error)}
+        className={cn('block h-10 w-full rounded-tag border bg-paper-raised px-2.5 text-base text-ink focus-visible:border-patina-500', error ? 'border-danger' : 'border-rule-strong')}
+        {...props}
+      >
+        {children}
+      </select>
     </FieldShell>
   );
 }

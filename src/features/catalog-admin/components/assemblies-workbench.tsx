@@ -12,7 +12,7 @@ import { useAssemblyRecord } from '../api/get-assembly-record';
 import { useVehicleNames, useVehicleTree } from '../api/get-vehicle-trees';
 import { AssemblyEditor, flattenTree } from './assembly-editor';
 import { CreateAssemblyForm } from './create-assembly-form';
-import { SelectField } from './editor-controls';
+import { SelectField } from '@/components/ui/form-field';
 
 /** Pick a vehicle, then an assembly from its tree (or make a new one); the choice lives in the URL. */
 export function AssembliesWorkbench() {

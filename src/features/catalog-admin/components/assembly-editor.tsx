@@ -9,7 +9,7 @@ import { createAssemblyInput } from '@shared/schemas/catalog';
 import { PageSkeleton } from '@/components/layouts/page-skeleton';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { TextAreaField, TextField } from '@/components/ui/form-field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/form-field';
 import { FormAlert, Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -20,7 +20,7 @@ import { useDeleteLine } from '../api/delete-line';
 import { useAssemblyRecord } from '../api/get-assembly-record';
 import { useUpdateAssembly } from '../api/update-assembly';
 import { useUpdateLine } from '../api/update-line';
-import { ConfirmButton, SelectField } from './editor-controls';
+import { ConfirmButton } from './editor-controls';
 import { LineForm } from './line-form';
 
 const assemblyForm = z.object({

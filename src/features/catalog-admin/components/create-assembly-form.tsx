@@ -6,12 +6,11 @@ import { toast } from 'sonner';
 import { z } from 'zod';
 import { createAssemblyInput } from '@shared/schemas/catalog';
 import { Button } from '@/components/ui/button';
-import { TextAreaField, TextField } from '@/components/ui/form-field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/form-field';
 import { FormAlert } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateAssembly } from '../api/create-assembly';
-import { SelectField } from './editor-controls';
 
 const shape = createAssemblyInput.shape;
 const newAssemblyForm = z.object({

@@ -5,12 +5,12 @@ import { useNavigate } from 'react-router-dom';
 import { toast } from 'sonner';
 import { createPartInput, partNumberInput, partNumberKindLabels, partNumberKinds, safetyClasses } from '@shared/schemas/catalog';
 import { Button } from '@/components/ui/button';
-import { TextAreaField, TextField } from '@/components/ui/form-field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/form-field';
 import { FormAlert } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreatePart } from '../api/create-part';
-import { CategoryOptions, SelectField } from './editor-controls';
+import { CategoryOptions } from './editor-controls';
 
 // A new part starts with its name, category and first number; more numbers, specs and sizes come in the editor.
 const newPartForm = createPartInput

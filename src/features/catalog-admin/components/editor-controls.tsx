@@ -1,44 +1,5 @@
-import { useId, useState, type ReactNode, type Ref, type SelectHTMLAttributes } from 'react';
+import { useState } from 'react';
 import { Button } from '@/components/ui/button';
-import { cn } from '@/lib/cn';
-
-export type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, 'id'> & {
-  label: string;
-  error?: string;
-  hint?: ReactNode;
-  ref?: Ref<HTMLSelectElement>;
-  children: ReactNode;
-};
-
-/** A labelled select in the look of the shared text fields. */
-export function SelectField({ label, error, hint, className, ref, children, ...props }: SelectFieldProps) {
-  const id = useId();
-  return (
-    <div className={className}>
-      <label htmlFor={id} className="mb-1.5 block text-sm font-semibold text-ink">
-        {label}
-      </label>
-      <select
-        id={id}
-        ref={ref}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : hint ? `${id}-hint` : undefined}
-        className={cn('block h-10 w-full rounded-tag border bg-paper-raised px-2 text-base text-ink', error ? 'border-danger' : 'border-rule-strong')}
-        {...props}
-      >
-        {children}
-      </select>
-      {hint ? (
-        <p id={`${id}-hint`} className="mt-1 text-xs text-ink-muted">
-          {hint}
-        </p>
-      ) : null}
-      <p id={`${id}-error`} aria-live="polite" className="mt-1 text-sm font-medium text-danger empty:mt-0">
-        {error}
-      </p>
-    </div>
-  );
-}
 
 /** A destructive action that asks once more in place (no browser dialog). */
 export function ConfirmButton({ label, confirmLabel, onConfirm, isPending }: { label: string; confirmLabel: string; onConfirm: () => void; isPending?: boolean }) {

@@ -9,7 +9,7 @@ import { createPartInput, partNumberInput, partNumberKindLabels, partNumberKinds
 import { PageSkeleton } from '@/components/layouts/page-skeleton';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
-import { TextAreaField, TextField } from '@/components/ui/form-field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/form-field';
 import { FormAlert, Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -20,7 +20,7 @@ import { useDeletePartNumber } from '../api/delete-part-number';
 import { useDeleteSupersession } from '../api/delete-supersession';
 import { usePartRecord } from '../api/get-part-record';
 import { useUpdatePart } from '../api/update-part';
-import { CategoryOptions, ConfirmButton, SelectField } from './editor-controls';
+import { CategoryOptions, ConfirmButton } from './editor-controls';
 import { SupersessionForm } from './supersession-form';
 
 /** Everything about one part an administrator can change: details, numbers, supersessions; or delete it. */

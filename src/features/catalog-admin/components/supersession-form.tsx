@@ -5,11 +5,10 @@ import { toast } from 'sonner';
 import { z } from 'zod';
 import { createSupersessionInput, interchangeLabels, interchanges } from '@shared/schemas/catalog';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/form-field';
+import { SelectField, TextField } from '@/components/ui/form-field';
 import { FormAlert } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateSupersession } from '../api/create-supersession';
-import { SelectField } from './editor-controls';
 
 const shape = createSupersessionInput.shape;
 // Asked from this part's side ("is replaced by" / "replaces"); the request is the shared from/to shape.

@@ -3,7 +3,7 @@ import { useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
 import { conditionPolicies, conditionPolicyLabels, type ConditionPolicy } from '@shared/schemas/garage';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/form-field';
+import { SelectField, TextField } from '@/components/ui/form-field';
 import { Notice } from '@/components/ui/notice';
 import { Skeleton } from '@/components/ui/skeleton';
 import { fieldErrorsOf } from '@/lib/api-client';
@@ -11,7 +11,6 @@ import { useCreateAlert } from '../api/create-alert';
 import { useDeleteAlert } from '../api/delete-alert';
 import { useAlerts } from '../api/get-alerts';
 import { formatCents, parseDollarsToCents } from '../utils/garage-format';
-import { SelectField } from './select-field';
 
 /** Watch a part number with a condition and a top price; a notice arrives when a matching listing goes live. */
 export function AlertForm() {

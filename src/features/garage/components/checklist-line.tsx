@@ -16,7 +16,7 @@ import type { ChecklistLine } from '../api/garage-schemas';
 import { useUpdateTeardownItem } from '../api/update-teardown-item';
 import { useUploadTeardownPhotos } from '../api/upload-teardown-photos';
 import { needStatuses, safetyLine, statusShortLabels, statusTone } from '../utils/garage-format';
-import { SelectField } from './select-field';
+import { SelectField } from '@/components/ui/form-field';
 
 const ACCEPT = 'image/jpeg,image/png,image/webp';
 

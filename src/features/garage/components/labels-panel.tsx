@@ -4,7 +4,7 @@ import { labelLayoutIds, type LabelLayoutId } from '@shared/schemas/garage';
 import { buttonClasses } from '@/components/ui/button';
 import { apiPaths } from '@/config/paths';
 import { env } from '@/config/env';
-import { SelectField } from './select-field';
+import { SelectField } from '@/components/ui/form-field';
 
 // Names as the label service gives them (server/services/labels.ts LABEL_LAYOUTS).
 const layoutNames: Record<LabelLayoutId, string> = {

@@ -11,7 +11,7 @@ import { useBuildPlan } from '../api/build-plan';
 import type { SourcingPlan, ToCartResult } from '../api/garage-schemas';
 import { usePlanToCart } from '../api/plan-to-cart';
 import { conditionShortLabels, formatCents, unfilledReasonLabels } from '../utils/garage-format';
-import { SelectField } from './select-field';
+import { SelectField } from '@/components/ui/form-field';
 
 // Where the plan ships to. The demo sellers ship within North America; others simply show as unfilled.
 const destinations = [

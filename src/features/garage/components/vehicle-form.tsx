@@ -4,13 +4,12 @@ import { useForm } from 'react-hook-form';
 import { z } from 'zod';
 import { createGarageVehicleInput, originalityTargetLabels, originalityTargets } from '@shared/schemas/garage';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/form-field';
+import { SelectField, TextField } from '@/components/ui/form-field';
 import { FormAlert } from '@/components/ui/notice';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCatalogModel, useCatalogModels } from '../api/get-catalog-models';
 import { useCreateGarageVehicle } from '../api/create-garage-vehicle';
 import type { GarageVehicle } from '../api/garage-schemas';
-import { SelectField } from './select-field';
 
 // The shared request schema, with empty optional fields turned into null before it checks them.
 const emptyToNull = z

@@ -2,11 +2,10 @@ import { useState, type FormEvent } from 'react';
 import { toast } from 'sonner';
 import { conditionPolicies, conditionPolicyLabels, type ConditionPolicy } from '@shared/schemas/garage';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/form-field';
+import { SelectField, TextField } from '@/components/ui/form-field';
 import { isApiError } from '@/lib/api-client';
 import { resolvePartNumber, useAddWant } from '../api/add-want';
 import type { PartSummary } from '../api/garage-schemas';
-import { SelectField } from './select-field';
 
 /** Adds a want by hand: a part number as typed, how many, in which condition. */
 export function WantForm({ vehicleId }: { vehicleId: string }) {

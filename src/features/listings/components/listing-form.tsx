@@ -2,7 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { LISTING_LIMITS, listingConditionCodes, usedGradeCodes, type CreateListingInput } from '@shared/schemas/listings';
 import { Button } from '@/components/ui/button';
-import { TextAreaField, TextField } from '@/components/ui/form-field';
+import { SelectField, TextAreaField, TextField } from '@/components/ui/form-field';
 import { FormAlert } from '@/components/ui/notice';
 import { fieldErrorsOf, isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
@@ -11,7 +11,6 @@ import type { ShippingProfileOption } from '../api/listing-types';
 import { conditionLabels, rubberUseLabels, usedGradeLabels } from '../utils/condition-labels';
 import { emptyListingForm, formValuesToInput, inputToFormField, listingFormResolver, type ListingFormValues } from './listing-form-values';
 import { PartPicker } from './part-picker';
-import { SelectField } from './select-field';
 
 type Props = {
   mode: 'create' | 'edit';
