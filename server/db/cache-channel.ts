@@ -17,17 +17,19 @@ export interface CacheChannel {
   stop(): Promise<void>;
 }
 
-export async function startCacheChannel(opts: { url: string; onRemoteClear: () => void; retryMs?: number }): Promise<CacheChannel> {
+export async function startCacheChannel(opts: { url: string; onRemoteClear: () => void; retryMs?: number; channel?: string }): Promise<CacheChannel> {
   const me = randomUUID();
+  const name = opts.channel ?? CACHE_CHANNEL;
+  if (!/^[a-z_][a-z0-9_]*$/.test(name)) throw new Error(`not a channel name: ${name}`);
   let client: pg.Client | null = null;
   let stopped = false;
   let retry: NodeJS.Timeout | undefined;
   let delay = opts.retryMs ?? 500;
 
   const connect = async (): Promise<void> => {
-    const c = new pg.Client({ connectionString: opts.url, application_name: 'drabyard-cache-channel' });
+    const c = new pg.Client({ connectionString: opts.url, application_name: `drabyard-cache-${name}`.slice(0, 63) });
     c.on('notification', (n) => {
-      if (n.channel === CACHE_CHANNEL && n.payload !== me) opts.onRemoteClear();
+      if (n.channel === name && n.payload !== me) opts.onRemoteClear();
     });
     c.on('error', (err) => logger.warn({ err }, 'cache channel connection failed; reconnecting'));
     c.on('end', () => {
@@ -35,7 +37,7 @@ export async function startCacheChannel(opts: { url: string; onRemoteClear: () =
       if (!stopped) schedule();
     });
     await c.connect();
-    await c.query(`LISTEN ${CACHE_CHANNEL}`);
+    await c.query(`LISTEN ${name}`);
     client = c;
     delay = opts.retryMs ?? 500;
   };
@@ -59,7 +61,7 @@ export async function startCacheChannel(opts: { url: string; onRemoteClear: () =
     async notify() {
       const c = client;
       if (!c) return; // the others clear when their own TTLs end; this process reconnects meanwhile
-      await c.query('SELECT pg_notify($1, $2)', [CACHE_CHANNEL, me]);
+      await c.query('SELECT pg_notify($1, $2)', [name, me]);
     },
     async stop() {
       stopped = true;

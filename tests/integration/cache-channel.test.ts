@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { afterEach, describe, expect, it } from 'vitest';
 import { startCacheChannel, type CacheChannel } from '../../server/db/cache-channel';
@@ -5,9 +6,11 @@ import { getDb } from '../../server/db/client';
 import { clearReadCaches, readCache, setCacheBroadcast } from '../../server/lib/read-cache';
 
 const url = () => process.env.DATABASE_URL as string;
+// A channel of this file's own: app processes other tests start in the same database use the real one.
+const NAME = `test_caches_${randomUUID().replaceAll('-', '').slice(0, 12)}`;
 const open: CacheChannel[] = [];
 const channel = async (onRemoteClear: () => void) => {
-  const c = await startCacheChannel({ url: url(), onRemoteClear, retryMs: 50 });
+  const c = await startCacheChannel({ url: url(), onRemoteClear, retryMs: 50, channel: NAME });
   open.push(c);
   return c;
 };
@@ -52,10 +55,10 @@ describe('read caches across app processes', () => {
     const other = await channel(() => undefined);
     await channel(() => cleared++);
     const listeners = async () =>
-      (await getDb().execute<{ pid: number }>(sql`SELECT pid FROM pg_stat_activity WHERE application_name = 'drabyard-cache-channel' AND datname = current_database()`)).rows;
+      (await getDb().execute<{ pid: number }>(sql`SELECT pid FROM pg_stat_activity WHERE application_name = ${`drabyard-cache-${NAME}`}`)).rows;
     const before = await listeners();
     expect(before).toHaveLength(2);
-    await getDb().execute(sql`SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = 'drabyard-cache-channel' AND datname = current_database()`);
+    await getDb().execute(sql`SELECT pg_terminate_backend(pid) FROM pg_stat_activity WHERE application_name = ${`drabyard-cache-${NAME}`}`);
     expect(await until(() => cleared >= 1)).toBe(true);
     // Both are back on new connections; the other's notice reaches this one again.
     for (let i = 0; i < 100; i++) {
