@@ -179,10 +179,13 @@ export async function resolveNumberHits(typed: string, notFound?: () => void): P
   return { ...lower, via: seeds.via, parts: [...out.values()] };
 }
 
-/** Close numbers by trigram similarity (the fallback of the empty state; drizzle/0008_number_lookups.sql). */
-export async function closeNumbers(key: string, limit = 5): Promise<Array<{ number: string; partId: string }>> {
-  if (key.length < 3) return [];
-  const k = key.toUpperCase();
+/**
+ * Close numbers by trigram similarity of folded keys, so an O typed for a 0 costs nothing (the fallback of the
+ * empty state; the function is in drizzle/0011_close_numbers_folded.sql).
+ */
+export async function closeNumbers(folded: string, limit = 5): Promise<Array<{ number: string; partId: string }>> {
+  if (folded.length < 3) return [];
+  const k = folded.toUpperCase();
   const found = await run<{ printed: string; part_id: string }>(sql`
     SELECT printed, part_id FROM close_part_numbers(${k}, ${limit * 3})`, { prepare: 'close_numbers' });
   const seen = new Set<string>();

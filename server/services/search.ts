@@ -520,7 +520,7 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   let matchMode: SearchReply['matchMode'] = 'browse';
   let numberInfo: Map<string, NumberHitPart> | null = null;
   let fixes = new Map<string, string>();
-  let numberKey: string | null = null;
+  let numberFolded: string | null = null;
   let closeEarly: ReturnType<typeof closeNumbers> | null = null;
 
   if (chunks.length && isNumberQuery(text)) {
@@ -530,12 +530,12 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
       if (cursor) return;
       const p = parsePartNumber(text);
       if (!p.ok) return;
-      closeEarly = closeNumbers(p.value.key.toLowerCase());
+      closeEarly = closeNumbers(p.value.folded);
       // Handled here too, so a failure while the rest is still running is never an unhandled rejection.
       closeEarly.catch(() => undefined);
     });
     if (r) {
-      numberKey = r.key;
+      numberFolded = r.folded;
       numberInfo = new Map(r.parts.map((p) => [p.partId, p]));
       match = { kind: 'number', partIds: r.parts.map((p) => p.partId), scores: r.parts.map((p) => p.score), keys: [...new Set([r.key, r.folded])] };
       matchMode = 'number';
@@ -593,7 +593,7 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   const total = exactTotal ?? roughly(res.total * rate);
   let didYouMean: SearchReply['didYouMean'] = [];
   if (total === 0 && !cursor) {
-    const key = numberKey ?? chunks.find((c) => c.key)?.key ?? null;
+    const key = numberFolded ?? chunks.find((c) => c.folded)?.folded ?? null;
     if (key) didYouMean = await (closeEarly ?? closeNumbers(key));
   }
   return {

@@ -108,6 +108,16 @@ describe('search: part numbers in any shape', () => {
     }
   });
 
+  it('when an O is typed for a 0 and a digit is wrong besides, then the right number is still proposed as close', async () => {
+    const body = digits(5);
+    const printed = `KN-20${body}-R`;
+    const part = await createPart({ numbers: [{ number: printed }] });
+    // Two edits from the number (a wrong digit, a dropped letter), typed with an O for the 0.
+    const r = await find({ q: `KN-2O${body.slice(0, 4)}${body[4] === '9' ? '1' : '9'}` });
+    expect(r.total).toBe(0);
+    expect(r.didYouMean).toContainEqual({ number: printed, partId: part.id });
+  });
+
   it('when nothing is close enough, then there are no hits and close numbers are proposed', async () => {
     const printed = `VR-${digits(6)}-M2`;
     const part = await createPart({ numbers: [{ number: printed }] });

@@ -110,7 +110,7 @@ export const partNumbers = pgTable(
     index('part_numbers_key_idx').on(t.key),
     index('part_numbers_folded_idx').on(t.folded),
     index('part_numbers_key_prefix_idx').on(sql`${t.key} text_pattern_ops`),
-    index('part_numbers_key_trgm_idx').using('gin', sql`${t.key} gin_trgm_ops`),
+    index('part_numbers_folded_trgm_idx').using('gin', sql`${t.folded} gin_trgm_ops`),
     // part_numbers_deletions_idx (GIN over number_key_deletions(folded), numbers one typo away) is a custom
     // migration, drizzle/0008_number_lookups.sql, as the function it indexes is.
   ],
