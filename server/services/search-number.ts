@@ -54,11 +54,14 @@ const byKey = (a: NumberRow, b: NumberRow) => (a.key < b.key ? -1 : a.key > b.ke
  * as none of them finds anything.
  */
 async function findSeeds(key: string, folded: string, notFound?: () => void): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
-  // Keys are letters and digits only, so the LIKE pattern needs no escaping; text_pattern_ops serves it.
+  // A key prefix as a range on the C-ordered index (text_pattern_ops): in the generic plan this prepared
+  // statement keeps, a LIKE with a parameter could not use that index. Keys are capital letters and digits, so
+  // the key with its last character moved up by one bounds every key that starts with it.
+  const upper = key.slice(0, -1) + String.fromCharCode(key.charCodeAt(key.length - 1) + 1);
   const levels = sql`
     exact AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers WHERE key = ${key} OR folded = ${folded} LIMIT 200),
     prefix AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers
-      WHERE ${key.length >= 3 ? sql`NOT EXISTS (SELECT 1 FROM exact)` : sql`false`} AND key LIKE ${key + '%'} LIMIT ${SEED_LIMIT}),
+      WHERE ${key.length >= 3 ? sql`NOT EXISTS (SELECT 1 FROM exact)` : sql`false`} AND key ~>=~ ${key} AND key ~<~ ${upper} LIMIT ${SEED_LIMIT}),
     near AS MATERIALIZED (SELECT part_id, printed, key, folded FROM part_numbers
       WHERE NOT EXISTS (SELECT 1 FROM exact) AND NOT EXISTS (SELECT 1 FROM prefix)
         AND number_key_deletions(folded) && ${sql.param(nearLookupKeys(folded))}::text[] LIMIT ${NEAR_CANDIDATES}),
