@@ -471,84 +471,58 @@ export function resolve(input: ResolveInput): ResolveResult {
   const chain: ChainStep[] = [];
   const limited = new Set<string>();
 
-  const forward = new Set<string>(seeds);
-  const fq: WalkState[] = seeds.map((p) => ({ partId: p, quantity: 1, interchange: 'two_way', conditions: [], depth: 0, path: [p] }));
-  for (let q = 0; q < fq.length; q++) {
-    const s = fq[q];
-    const outs = index.out.get(s.partId) ?? EMPTY;
-    if (outs.length === 0) continue;
-    if (s.depth >= maxDepth) {
-      if (outs.some((e) => !forward.has(e.toPartId))) limited.add(s.partId);
-      continue;
-    }
-    for (const e of outs) {
-      chain.push(step(e, s.depth + 1, 'forward'));
-      if (forward.has(e.toPartId)) continue;
-      forward.add(e.toPartId);
-      const next: WalkState = {
-        partId: e.toPartId,
-        quantity: s.quantity * e.quantity,
-        interchange: weakest(s.interchange, e.interchange),
-        conditions: withCondition(s.conditions, e),
-        depth: s.depth + 1,
-        path: [...s.path, e.toPartId],
-      };
-      fq.push(next);
-      if (!matched.has(e.toPartId)) {
-        matched.add(e.toPartId);
+  /**
+   * One breadth-first walk from the seeds, forward (to replacements: quantities multiply, a step to several
+   * parts is a kit) or backward (to the parts replaced). Every part reached becomes a match once; every edge
+   * walked is a chain step, except a backward edge already walked forward (inside a loop).
+   */
+  const walk = (direction: 'forward' | 'backward', walkedForward: ReadonlySet<string> | null) => {
+    const fwd = direction === 'forward';
+    const edgesOf = (id: string) => (fwd ? index.out : index.in).get(id) ?? EMPTY;
+    const far = (e: SupersessionEdge) => (fwd ? e.toPartId : e.fromPartId);
+    const seen = new Set<string>(seeds);
+    const queue: WalkState[] = seeds.map((p) => ({ partId: p, quantity: 1, interchange: 'two_way', conditions: [], depth: 0, path: [p] }));
+    for (let q = 0; q < queue.length; q++) {
+      const s = queue[q];
+      const edges = edgesOf(s.partId);
+      if (edges.length === 0) continue;
+      if (s.depth >= maxDepth) {
+        if (edges.some((e) => !seen.has(far(e)))) limited.add(s.partId);
+        continue;
+      }
+      for (const e of edges) {
+        const to = far(e);
+        if (fwd || !walkedForward?.has(to)) chain.push(step(e, s.depth + 1, direction));
+        if (seen.has(to)) continue;
+        seen.add(to);
+        const next: WalkState = {
+          partId: to,
+          quantity: fwd ? s.quantity * e.quantity : 1,
+          interchange: weakest(s.interchange, e.interchange),
+          conditions: withCondition(s.conditions, e),
+          depth: s.depth + 1,
+          path: [...s.path, to],
+        };
+        queue.push(next);
+        if (matched.has(to)) continue;
+        matched.add(to);
         matches.push({
-          partId: e.toPartId,
-          number: firstNumber(e.toPartId),
-          matchedBy: 'replaced_by',
+          partId: to,
+          number: firstNumber(to),
+          matchedBy: fwd ? 'replaced_by' : 'replaces',
           interchange: next.interchange,
           viaPartId: s.partId,
-          ...(outs.length > 1 ? { kitOf: s.partId } : {}),
+          ...(fwd && edges.length > 1 ? { kitOf: s.partId } : {}),
           depth: next.depth,
           conditions: next.conditions,
         });
       }
     }
-  }
-  const current = fq.filter((s) => (index.out.get(s.partId) ?? EMPTY).length === 0).map((s) => s.partId);
-
-  const backward = new Set<string>(seeds);
-  const bq: WalkState[] = seeds.map((p) => ({ partId: p, quantity: 1, interchange: 'two_way', conditions: [], depth: 0, path: [p] }));
-  for (let q = 0; q < bq.length; q++) {
-    const s = bq[q];
-    const ins = index.in.get(s.partId) ?? EMPTY;
-    if (ins.length === 0) continue;
-    if (s.depth >= maxDepth) {
-      if (ins.some((e) => !backward.has(e.fromPartId))) limited.add(s.partId);
-      continue;
-    }
-    for (const e of ins) {
-      // An edge already walked forward (inside a loop) is not listed twice.
-      if (!forward.has(e.fromPartId)) chain.push(step(e, s.depth + 1, 'backward'));
-      if (backward.has(e.fromPartId)) continue;
-      backward.add(e.fromPartId);
-      const next: WalkState = {
-        partId: e.fromPartId,
-        quantity: 1,
-        interchange: weakest(s.interchange, e.interchange),
-        conditions: withCondition(s.conditions, e),
-        depth: s.depth + 1,
-        path: [...s.path, e.fromPartId],
-      };
-      bq.push(next);
-      if (!matched.has(e.fromPartId)) {
-        matched.add(e.fromPartId);
-        matches.push({
-          partId: e.fromPartId,
-          number: firstNumber(e.fromPartId),
-          matchedBy: 'replaces',
-          interchange: next.interchange,
-          viaPartId: s.partId,
-          depth: next.depth,
-          conditions: next.conditions,
-        });
-      }
-    }
-  }
+    return { seen, queue };
+  };
+  const forward = walk('forward', null);
+  const current = forward.queue.filter((s) => (index.out.get(s.partId) ?? EMPTY).length === 0).map((s) => s.partId);
+  const backward = walk('backward', forward.seen);
 
   // Fillers of every seed, merged: a need for the number is met by a filler of any part carrying it.
   const fillers: string[] = [];
@@ -568,7 +542,7 @@ export function resolve(input: ResolveInput): ResolveResult {
     }
   }
 
-  const reached = new Set<string>([...forward, ...backward]);
+  const reached = new Set<string>([...forward.seen, ...backward.seen]);
   for (const set of fillerSets) for (const m of set.parts) for (const a of m.alternatives) reached.add(a.partId);
   problems.push(...loopProblems(loopsAmong(index, reached, reached), label));
   if (limited.size > 0) problems.push(depthProblem([...limited], maxDepth, label));
