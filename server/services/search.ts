@@ -96,22 +96,25 @@ async function resolveFilters(q: SearchQuery): Promise<{ groups: FilterGroup[]; 
     if (v !== undefined) fixed(facet, [String(v)]);
   }
 
+  // The values sit in a sub-select, so the prepared statement's plan does not depend on how many there are and
+  // PostgreSQL keeps one generic plan (DEVELOPERS.md, decision 14).
+  const anyOf = (values: string[], type: 'text' | 'uuid') => sql`(SELECT ${sql.param(values)}::${sql.raw(type)}[])::${sql.raw(type)}[]`;
   const lookups: SQL[] = [];
   if (q.vehicle.length)
     lookups.push(sql`SELECT 'vehicle' AS facet, v.slug AS value, v.name AS label, r.code FROM vehicle_models v
-      LEFT JOIN search_facet_refs r ON r.facet = 2 AND r.ref = v.id::text WHERE v.slug = ANY(${sql.param(q.vehicle)}::text[])`);
+      LEFT JOIN search_facet_refs r ON r.facet = 2 AND r.ref = v.id::text WHERE v.slug = ANY(${anyOf(q.vehicle, 'text')})`);
   if (q.system.length)
     lookups.push(sql`SELECT 'system' AS facet, s.slug AS value, s.name AS label, r.code FROM systems s
-      LEFT JOIN search_facet_refs r ON r.facet = 3 AND r.ref = s.id::text WHERE s.slug = ANY(${sql.param(q.system)}::text[])`);
+      LEFT JOIN search_facet_refs r ON r.facet = 3 AND r.ref = s.id::text WHERE s.slug = ANY(${anyOf(q.system, 'text')})`);
   if (q.assembly.length)
     lookups.push(sql`SELECT 'assembly' AS facet, a.slug AS value, a.name AS label, r.code FROM assemblies a
-      LEFT JOIN search_facet_refs r ON r.facet = 4 AND r.ref = a.id::text WHERE a.slug = ANY(${sql.param(q.assembly)}::text[])`);
+      LEFT JOIN search_facet_refs r ON r.facet = 4 AND r.ref = a.id::text WHERE a.slug = ANY(${anyOf(q.assembly, 'text')})`);
   if (q.seller.length)
     lookups.push(sql`SELECT 'seller' AS facet, u.id::text AS value, coalesce(sp.shop_name, u.display_name) AS label, r.code FROM users u
       LEFT JOIN seller_profiles sp ON sp.user_id = u.id
-      LEFT JOIN search_facet_refs r ON r.facet = 7 AND r.ref = u.id::text WHERE u.id = ANY(${sql.param(q.seller)}::uuid[])`);
+      LEFT JOIN search_facet_refs r ON r.facet = 7 AND r.ref = u.id::text WHERE u.id = ANY(${anyOf(q.seller, 'uuid')})`);
   if (q.shipsTo.length)
-    lookups.push(sql`SELECT 'shipsTo' AS facet, c AS value, c AS label, r.code FROM unnest(${sql.param(q.shipsTo)}::text[]) c
+    lookups.push(sql`SELECT 'shipsTo' AS facet, c AS value, c AS label, r.code FROM unnest(${anyOf(q.shipsTo, 'text')}) c
       LEFT JOIN search_facet_refs r ON r.facet = 9 AND r.ref = c`);
   if (lookups.length) {
     const rows = await run<{ facet: FacetName; value: string; label: string; code: number | null }>(sql.join(lookups, sql` UNION ALL `), { prepare: 'facet_filters' });
