@@ -53,7 +53,7 @@ const byKey = (a: NumberRow, b: NumberRow) => (a.key < b.key ? -1 : a.key > b.ke
  * found nothing). Btree indexes for the first two, the deletions index for typos; `notFound` is called as soon
  * as none of them finds anything.
  */
-async function findSeeds(key: string, folded: string, notFound?: () => void): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
+async function findSeeds(key: string, folded: string, notFound?: (folded: string) => void): Promise<{ via: NumberMatch; rows: NumberRow[]; graph: Subgraph } | null> {
   // A key prefix as a range on the C-ordered index (text_pattern_ops): in the generic plan this prepared
   // statement keeps, a LIKE with a parameter could not use that index. Keys are capital letters and digits, so
   // the key with its last character moved up by one bounds every key that starts with it.
@@ -73,7 +73,7 @@ async function findSeeds(key: string, folded: string, notFound?: () => void): Pr
   let rows = (row.seeds ?? []).sort(byKey);
   if (rows[0]?.via === 'near') rows = nearest(folded, rows);
   if (!rows.length) {
-    notFound?.();
+    notFound?.(folded);
     return null;
   }
   const level = rows[0].via;
@@ -117,10 +117,10 @@ function relation(interchange: Interchange, conditions: string[]): string {
 }
 
 /**
- * Resolves a typed number to scored hit parts; null when the text is not a number. `notFound` is called as soon
- * as the number is not known in any shape (the caller may start on close numbers meanwhile).
+ * Resolves a typed number to scored hit parts; null when the text is not a number. `notFound` is called with the
+ * folded key as soon as the number is not known in any shape (the caller may start on close numbers meanwhile).
  */
-export async function resolveNumberHits(typed: string, notFound?: () => void): Promise<NumberResolution | null> {
+export async function resolveNumberHits(typed: string, notFound?: (folded: string) => void): Promise<NumberResolution | null> {
   const parsed = parsePartNumber(typed);
   if (!parsed.ok) return null;
   const { key, folded } = parsed.value;

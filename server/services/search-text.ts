@@ -65,7 +65,7 @@ export function keyDeletions(k: string): string[] {
 }
 
 /**
- * What a typed folded key looks up in the deletions index (drizzle/0008_number_key_deletions.sql) to find every
+ * What a typed folded key looks up in the deletions index (drizzle/0008_number_lookups.sql) to find every
  * key nearFoldedKeys would name: its deletions, and those folded again (an edit that leaves leading zeros folds
  * to a key more than one deletion away). Two keys one edit apart share a deletion (symmetric deletion: a
  * dropped or added character leaves the shorter key, a changed one the key without it, a swap the key without

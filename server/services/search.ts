@@ -529,11 +529,9 @@ export async function search(q: SearchQuery): Promise<SearchReply> {
   if (chunks.length && isNumberQuery(text)) {
     // An unknown number usually ends in the empty state: its close numbers (a trigram search) start as soon as
     // the number lookups come back empty, beside the scan.
-    const r = await resolveNumberHits(text, () => {
+    const r = await resolveNumberHits(text, (folded) => {
       if (cursor) return;
-      const p = parsePartNumber(text);
-      if (!p.ok) return;
-      closeEarly = closeNumbers(p.value.folded);
+      closeEarly = closeNumbers(folded);
       // Handled here too, so a failure while the rest is still running is never an unhandled rejection.
       closeEarly.catch(() => undefined);
     });
