@@ -24,7 +24,8 @@ export async function startCacheChannel(opts: { url: string; onRemoteClear: () =
   let client: pg.Client | null = null;
   let stopped = false;
   let retry: NodeJS.Timeout | undefined;
-  let delay = opts.retryMs ?? 500;
+  const firstDelay = opts.retryMs ?? 500;
+  let delay = firstDelay;
 
   const connect = async (): Promise<void> => {
     const c = new pg.Client({ connectionString: opts.url, application_name: `drabyard-cache-${name}`.slice(0, 63) });
@@ -39,7 +40,7 @@ export async function startCacheChannel(opts: { url: string; onRemoteClear: () =
     await c.connect();
     await c.query(`LISTEN ${name}`);
     client = c;
-    delay = opts.retryMs ?? 500;
+    delay = firstDelay;
   };
   const schedule = () => {
     if (stopped || retry) return;
